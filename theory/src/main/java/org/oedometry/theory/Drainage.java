@@ -1,0 +1,50 @@
+package org.oedometry.theory;
+
+import java.util.Locale;
+
+/**
+ * Drainage of a consolidating layer: through both faces or through one.
+ *
+ * <p>The drainage path H<sub>dr</sub> is the longest distance a drop of pore water travels to a
+ * drained face: half the thickness for double drainage, the whole thickness for single drainage.
+ * The time factor is T = c<sub>v</sub> t / H<sub>dr</sub><sup>2</sup>, so a mistaken drainage
+ * condition changes c<sub>v</sub> (or a forecast time) by a factor of 4.
+ *
+ * <p>Thread-safe and immutable, as every enum.
+ */
+public enum Drainage {
+  /** Drained at the top and bottom faces (the usual oedometer set-up): H<sub>dr</sub> = H / 2. */
+  DOUBLE(2),
+  /** Drained at one face only, the other impervious: H<sub>dr</sub> = H. */
+  SINGLE(1);
+
+  private final int drainedFaces;
+
+  Drainage(int drainedFaces) {
+    this.drainedFaces = drainedFaces;
+  }
+
+  /**
+   * Number of drained faces.
+   *
+   * @return 2 for {@link #DOUBLE}, 1 for {@link #SINGLE}
+   */
+  public int drainedFaces() {
+    return drainedFaces;
+  }
+
+  /**
+   * Drainage path for a layer or specimen of the given thickness.
+   *
+   * @param thicknessMetres thickness H of the layer or specimen, m; finite and &gt; 0
+   * @return H<sub>dr</sub> in m: H / 2 for {@link #DOUBLE}, H for {@link #SINGLE}
+   * @throws IllegalArgumentException if the thickness is not finite and positive
+   */
+  public double drainagePath(double thicknessMetres) {
+    if (!(thicknessMetres > 0) || thicknessMetres == Double.POSITIVE_INFINITY) {
+      throw new IllegalArgumentException(
+          String.format(Locale.ROOT, "thickness (%s m) must be finite and > 0", thicknessMetres));
+    }
+    return thicknessMetres / drainedFaces;
+  }
+}
