@@ -1,7 +1,5 @@
 package org.oedometry.theory;
 
-import java.util.Locale;
-
 /**
  * Drainage of a consolidating layer: through both faces or through one.
  *
@@ -41,10 +39,7 @@ public enum Drainage {
    * @throws IllegalArgumentException if the thickness is not finite and positive
    */
   public double drainagePath(double thicknessMetres) {
-    if (!(thicknessMetres > 0) || thicknessMetres == Double.POSITIVE_INFINITY) {
-      throw new IllegalArgumentException(
-          String.format(Locale.ROOT, "thickness (%s m) must be finite and > 0", thicknessMetres));
-    }
+    Messages.requirePositiveFinite("thickness", thicknessMetres, "m");
     return thicknessMetres / drainedFaces;
   }
 }
