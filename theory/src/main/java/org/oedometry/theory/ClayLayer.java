@@ -38,6 +38,10 @@ public record ClayLayer(double thickness, Drainage drainage, double cv, double u
   /**
    * Validates the layer.
    *
+   * @param thickness layer thickness H, m; finite and &gt; 0
+   * @param drainage drainage of the layer
+   * @param cv coefficient of consolidation, m<sup>2</sup>/s; finite and &gt; 0
+   * @param ultimateSettlement ultimate primary consolidation settlement, m; finite and &ge; 0
    * @throws IllegalArgumentException if a number is out of range or NaN
    * @throws NullPointerException if drainage is null
    */

@@ -37,15 +37,15 @@ import org.apache.commons.math3.special.Erf;
  * 10<sup>-18</sup> at T<sub>s</sub>, is below 0.06 units in the last place of U, so U = 2
  * &radic;(T/&pi;) holds to double precision and costs one square root; dU/dT keeps its first
  * correction (1 - 2 e<sup>-1/T</sup>), which reaches 2 ulp at T<sub>s</sub>. At and above
- * T<sub>s</sub> the Fourier terms decay like q<sup>(2m+1)<sup>2</sup></sup> with q =
- * exp(-&pi;<sup>2</sup>T/4) &le; 0.934; all of them are generated from the single exponential q by
- * the recurrence q<sup>(2m+3)<sup>2</sup></sup> = q<sup>(2m+1)<sup>2</sup></sup> q<sup>8(m+1)
- * </sup>, q<sup>8(m+1)</sup> = q<sup>8m</sup> q<sup>8</sup>, and the sum stops when a term falls
- * below 2<sup>-56</sup> of the partial sum (at most 13 terms at T<sub>s</sub>, 3 terms at T = 1, 1
- * term above T &asymp; 4). The pore pressure uses the same switch: below it, 2 to 4 erfc terms
- * (from Commons Math {@link Erf#erfc(double)}) of the image form, each sum stopped when the erfc
- * argument exceeds 6 (erfc(6) &lt; 2.2 x 10<sup>-17</sup>, the series alternates so the truncation
- * error is below the first omitted term); above it the Fourier series with one sine a term.
+ * T<sub>s</sub> the Fourier terms decay like q^((2m+1)^2) with q = exp(-&pi;<sup>2</sup>T/4) &le;
+ * 0.934; all of them are generated from the single exponential q by the recurrence q^((2m+3)^2) =
+ * q^((2m+1)^2) q<sup>8(m+1) </sup>, q<sup>8(m+1)</sup> = q<sup>8m</sup> q<sup>8</sup>, and the sum
+ * stops when a term falls below 2<sup>-56</sup> of the partial sum (at most 13 terms at
+ * T<sub>s</sub>, 3 terms at T = 1, 1 term above T &asymp; 4). The pore pressure uses the same
+ * switch: below it, 2 to 4 erfc terms (from Commons Math {@link Erf#erfc(double)}) of the image
+ * form, each sum stopped when the erfc argument exceeds 6 (erfc(6) &lt; 2.2 x 10<sup>-17</sup>, the
+ * series alternates so the truncation error is below the first omitted term); above it the Fourier
+ * series with one sine a term.
  *
  * <h2>Accuracy</h2>
  *
@@ -57,7 +57,7 @@ import org.apache.commons.math3.special.Erf;
  * below 1 x 10<sup>-14</sup> up to T = 20 [5.1 x 10<sup>-15</sup>]; {@link #timeFactor(double)}
  * relative error below 1 x 10<sup>-13</sup> for U in [10<sup>-8</sup>, 1 - 10<sup>-12</sup>] [2.0 x
  * 10<sup>-15</sup>]; {@link #porePressureRatio(double, double)} absolute error below 1 x
- * 10<sup>-13</sup> for T &ge; 10 <sup>-6</sup> [4.9 x 10<sup>-16</sup>]. Relative errors of 1 - U
+ * 10<sup>-13</sup> for T &ge; 10<sup>-6</sup> [4.9 x 10<sup>-16</sup>]. Relative errors of 1 - U
  * and dU/dT grow slowly with T (the exponent &pi;<sup>2</sup>T/4 carries a rounding error of its
  * own).
  *
@@ -147,8 +147,8 @@ public final class Terzaghi {
 
   /**
    * Fraction of primary consolidation still to come, 1 - U(T), computed directly so that it keeps
-   * its relative accuracy as U approaches 1 (1 - U = (8/&pi;<sup>2</sup>) e<sup>-&pi;<sup>2</sup>
-   * T/4</sup> to within 10<sup>-9</sup> relative above T = 2).
+   * its relative accuracy as U approaches 1 (1 - U = (8/&pi;<sup>2</sup>) exp(-&pi;<sup>2</sup>
+   * T/4) to within 10<sup>-9</sup> relative above T = 2).
    *
    * @param timeFactor T, dimensionless, &ge; 0 (+&infin; allowed)
    * @return 1 - U in (0, 1], dimensionless; 0 only for T = +&infin; or where it underflows (T &gt;
