@@ -30,8 +30,29 @@ final class Messages {
   static double requirePositiveFinite(String name, double value, String unit) {
     if (!(value > 0) || value == Double.POSITIVE_INFINITY) {
       throw new IllegalArgumentException(
-          format("%s (%s %s) must be finite and > 0", name, value, unit));
+          format("%s (%s) must be finite and > 0", name, withUnit(value, unit)));
     }
     return value;
+  }
+
+  /**
+   * Checks that a value is finite.
+   *
+   * @param name the field's name as the user knows it
+   * @param value the value
+   * @param unit the unit printed after the value, e.g. "m"
+   * @return the value
+   * @throws IllegalArgumentException naming the field and value otherwise
+   */
+  static double requireFinite(String name, double value, String unit) {
+    if (!Double.isFinite(value)) {
+      throw new IllegalArgumentException(
+          format("%s (%s) must be finite", name, withUnit(value, unit)));
+    }
+    return value;
+  }
+
+  private static String withUnit(double value, String unit) {
+    return unit.isEmpty() ? String.valueOf(value) : value + " " + unit;
   }
 }

@@ -1,0 +1,142 @@
+package org.oedometry.theory;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.doubles;
+
+import org.apache.commons.math3.analysis.differentiation.DerivativeStructure;
+import org.apache.commons.math3.analysis.differentiation.FiniteDifferencesDifferentiator;
+import org.apache.commons.math3.analysis.differentiation.UnivariateDifferentiableFunction;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+class ConsolidationCurveModelTest {
+
+  private static final double YEAR = ClayLayer.SECONDS_PER_JULIAN_YEAR;
+  private static final ConsolidationCurveModel MODEL = ConsolidationCurveModel.of(0.0095);
+  private static final CurveParameters PARAMETERS =
+      CurveParameters.of(0.05e-3, 0.80e-3, 2.0 / YEAR, 0.04e-3);
+
+  @Test
+  @DisplayName("Settlement is d_i + d_p U(T) + s log10(1 + T/T_s), term by term")
+  void settlementFormula() {
+    double t = 600;
+    double timeFactor = 2.0 / YEAR * t / (0.0095 * 0.0095);
+    double expected =
+        0.05e-3
+            + 0.80e-3 * Terzaghi.averageDegree(timeFactor)
+            + 0.04e-3 * Math.log10(1 + timeFactor);
+    assertThat(MODEL.settlement(t, PARAMETERS)).isCloseTo(expected, within(1e-18));
+    assertThat(MODEL.secondarySettlement(t, PARAMETERS))
+        .isCloseTo(0.04e-3 * Math.log10(1 + timeFactor), within(1e-19));
+    assertThat(MODEL.settlement(0, PARAMETERS)).isEqualTo(0.05e-3);
+    assertThat(PARAMETERS.endOfPrimarySettlement()).isCloseTo(0.85e-3, within(1e-18));
+  }
+
+  @Test
+  @DisplayName(
+      "Analytic gradient matches a finite-difference derivative"
+          + " [Commons Math FiniteDifferencesDifferentiator, 8 points]")
+  void gradientMatchesFiniteDifferences() {
+    FiniteDifferencesDifferentiator differentiator = new FiniteDifferencesDifferentiator(8, 1e-3);
+    double[] gradient = new double[4];
+    for (double t = 6; t < 2e5; t *= 2.5) {
+      final double seconds = t;
+      double value = MODEL.settlementAndGradient(seconds, PARAMETERS, gradient);
+      assertThat(value).isEqualTo(MODEL.settlement(seconds, PARAMETERS));
+      double[] numeric = {
+        derivative(differentiator, x -> MODEL.settlement(seconds, with(0, x)), 0.05e-3),
+        derivative(differentiator, x -> MODEL.settlement(seconds, with(1, x)), 0.80e-3),
+        derivative(
+            differentiator,
+            x -> MODEL.settlement(seconds, with(2, Math.exp(x))),
+            Math.log(2.0 / YEAR)),
+        derivative(differentiator, x -> MODEL.settlement(seconds, with(3, x)), 0.04e-3)
+      };
+      for (int i = 0; i < 4; i++) {
+        double scale = Math.max(Math.abs(numeric[i]), 1e-6);
+        assertThat(gradient[i])
+            .as("parameter %d at t = %s s", i, seconds)
+            .isCloseTo(numeric[i], within(1e-8 * scale));
+      }
+    }
+  }
+
+  @Test
+  @DisplayName("Secondary term vanishes early and becomes s per log10 cycle late")
+  void secondaryTermShape() {
+    qt().withFixedSeed(7L)
+        .withExamples(300)
+        .forAll(doubles().between(-6, -1.31), doubles().between(1e-6, 1e-3))
+        .checkAssert(
+            (e, slope) -> {
+              CurveParameters p = CurveParameters.of(0, 1e-3, 1e-8, slope);
+              double t = Math.pow(10, e) * 0.0095 * 0.0095 / 1e-8; // T = 10^e <= 0.049
+              // log10(1 + x) <= x / ln 10: at most 2.1 % of s before T = 0.049.
+              assertThat(MODEL.secondarySettlement(t, p)).isBetween(0.0, 0.0213 * slope);
+            });
+    CurveParameters p = CurveParameters.of(0, 1e-3, 1e-8, 2e-5);
+    double primaryTime = 0.0095 * 0.0095 / 1e-8;
+    double perCycle =
+        MODEL.settlement(1000 * primaryTime, p) - MODEL.settlement(100 * primaryTime, p);
+    assertThat(perCycle).isCloseTo(2e-5, within(2e-5 * 0.005));
+  }
+
+  @Test
+  @DisplayName("Scaling time by k is the same curve with c_v / k (Terzaghi's scaling)")
+  void timeScaling() {
+    qt().withFixedSeed(11L)
+        .withExamples(300)
+        .forAll(doubles().between(0.01, 100), doubles().between(1, 1e5))
+        .checkAssert(
+            (k, t) -> {
+              CurveParameters scaled =
+                  CurveParameters.of(0.05e-3, 0.80e-3, 2.0 / YEAR / k, 0.04e-3);
+              assertThat(MODEL.settlement(k * t, scaled))
+                  .isCloseTo(MODEL.settlement(t, PARAMETERS), within(1e-15));
+            });
+  }
+
+  @Test
+  void rejectsBadInput() {
+    assertThatThrownBy(() -> ConsolidationCurveModel.of(0))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("drainage path (0.0 m) must be finite and > 0");
+    assertThatThrownBy(() -> new ConsolidationCurveModel(0.01, Double.NaN))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("secondary onset time factor (NaN) must be finite and > 0");
+    assertThatThrownBy(() -> MODEL.settlement(-1, PARAMETERS))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("elapsed time (-1.0 s) must be finite and >= 0");
+    assertThatThrownBy(() -> MODEL.settlementAndGradient(1, PARAMETERS, new double[3]))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("gradient array length (3) must be >= 4");
+    assertThatThrownBy(() -> CurveParameters.of(Double.NaN, 1, 1, 0))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("initial settlement (NaN m) must be finite");
+    assertThatThrownBy(() -> CurveParameters.of(0, 1, -1, 0))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("cv (-1.0 m^2/s) must be finite and > 0");
+    assertThatThrownBy(() -> CurveParameters.of(0, 1, 1, Double.POSITIVE_INFINITY))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("secondary slope (Infinity m per log10 cycle) must be finite");
+  }
+
+  private static CurveParameters with(int index, double value) {
+    double[] p = {0.05e-3, 0.80e-3, 2.0 / YEAR, 0.04e-3};
+    p[index] = value;
+    return CurveParameters.of(p[0], p[1], p[2], p[3]);
+  }
+
+  private static double derivative(
+      FiniteDifferencesDifferentiator differentiator,
+      java.util.function.DoubleUnaryOperator f,
+      double at) {
+    double step = Math.max(Math.abs(at), 1e-6) * 1e-3;
+    FiniteDifferencesDifferentiator scaled = new FiniteDifferencesDifferentiator(8, step);
+    UnivariateDifferentiableFunction g = scaled.differentiate(f::applyAsDouble);
+    return g.value(new DerivativeStructure(1, 1, 0, at)).getPartialDerivative(1);
+  }
+}
