@@ -1,0 +1,423 @@
+package org.oedometry.core;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.OptionalDouble;
+import org.oedometry.core.internal.Checks;
+import org.oedometry.theory.Drainage;
+
+/**
+ * A whole one-dimensional consolidation (oedometer) test as an immutable value: the specimen, its
+ * drainage, the ordered load increments with their readings, free-text identifiers, and the rule
+ * for each increment's drainage path.
+ *
+ * <p><b>Heights.</b> Each increment's settlement curve is measured from the specimen height at the
+ * start of that increment, with t = 0 at load application. The height at the start of increment i
+ * is the initial height minus the final settlements of the increments before it, summed in order:
+ * H<sub>start,0</sub> = H<sub>0</sub>, H<sub>start,i+1</sub> = H<sub>start,i</sub> -
+ * s<sub>final,i</sub>. The final settlement of an increment is its last reading.
+ *
+ * <p><b>Checks.</b> At least one increment; the stress before each increment equals the stress
+ * after the previous one (to a relative 1e-9); the specimen height stays above the height of solids
+ * at every reading (void ratio &gt; 0).
+ *
+ * <p><b>Defaults.</b> Double drainage ({@link Drainage#DOUBLE}), drainage path from the height at
+ * 50 % consolidation ({@link DrainagePathRule#HEIGHT_AT_HALF_CONSOLIDATION}), empty identifiers.
+ *
+ * <p>Results derived from a test feed engineering decisions: they must be reviewed by a qualified
+ * engineer, and local codes and standards govern.
+ *
+ * <p>Immutable and thread-safe. {@link #equals(Object)} is exact equality of every value.
+ */
+public final class OedometerTest {
+
+  private static final double STRESS_MATCH_TOLERANCE = 1e-9;
+
+  private final Specimen specimen;
+  private final Drainage drainage;
+  private final DrainagePathRule drainagePathRule;
+  private final TestIdentifiers identifiers;
+  private final List<LoadIncrement> increments;
+  private final double[] startHeights;
+  private final double heightOfSolids;
+
+  private OedometerTest(Builder b) {
+    specimen = b.specimen;
+    drainage = Objects.requireNonNull(b.drainage, "drainage must not be null");
+    drainagePathRule =
+        Objects.requireNonNull(b.drainagePathRule, "drainagePathRule must not be null");
+    identifiers = Objects.requireNonNull(b.identifiers, "identifiers must not be null");
+    for (int i = 0; i < b.increments.size(); i++) {
+      Objects.requireNonNull(b.increments.get(i), "increment at index " + i + " is null");
+    }
+    increments = List.copyOf(b.increments);
+    if (increments.isEmpty()) {
+      throw new IllegalArgumentException("an oedometer test needs at least one load increment");
+    }
+    for (int i = 1; i < increments.size(); i++) {
+      double before = increments.get(i).stressBeforePascals();
+      double previousAfter = increments.get(i - 1).stressAfterPascals();
+      if (!(Math.abs(before - previousAfter)
+          <= STRESS_MATCH_TOLERANCE * Math.max(Math.abs(before), Math.abs(previousAfter)))) {
+        throw new IllegalArgumentException(
+            Checks.format(
+                "stress before the increment at index %d (%s Pa) is not the stress after index"
+                    + " %d (%s Pa): increments out of order or missing",
+                i, Checks.number(before), i - 1, Checks.number(previousAfter)));
+      }
+    }
+    startHeights = new double[increments.size() + 1];
+    startHeights[0] = specimen.initialHeightMetres();
+    for (int i = 0; i < increments.size(); i++) {
+      startHeights[i + 1] = startHeights[i] - increments.get(i).curve().finalSettlementMetres();
+    }
+    double finalHeight = startHeights[increments.size()];
+    if (!(finalHeight > 0)) {
+      throw new IllegalArgumentException(
+          Checks.format(
+              "final specimen height (%s m) must be > 0: the settlements add up to more than the"
+                  + " initial height (%s m)",
+              Checks.number(finalHeight), Checks.number(startHeights[0])));
+    }
+    heightOfSolids =
+        specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
+            ? specimen.heightOfSolidsFromDryMass().getAsDouble()
+            : finalHeight / (1 + specimen.finalVoidRatioFromWaterContent().getAsDouble());
+    for (int i = 0; i < increments.size(); i++) {
+      SettlementCurve c = increments.get(i).curve();
+      for (int j = 0; j < c.size(); j++) {
+        double h = startHeights[i] - c.settlementMetres(j);
+        if (!(h > heightOfSolids)) {
+          throw new IllegalArgumentException(
+              Checks.format(
+                  "specimen height at reading %d of the increment at index %d (%s m) is not"
+                      + " above the height of solids (%s m): void ratio would be <= 0",
+                  j, i, Checks.number(h), Checks.number(heightOfSolids)));
+        }
+      }
+    }
+  }
+
+  /**
+   * A test with the default drainage (double), drainage path rule (height at 50 % consolidation)
+   * and empty identifiers.
+   *
+   * @param specimen the specimen; not null
+   * @param increments the load increments in the order applied; at least one
+   * @return the test
+   * @throws IllegalArgumentException as {@link Builder#build()}
+   * @throws NullPointerException if an argument or increment is null
+   */
+  public static OedometerTest of(Specimen specimen, List<LoadIncrement> increments) {
+    return builder(specimen).increments(increments).build();
+  }
+
+  /**
+   * A builder for a test of this specimen, with the defaults set.
+   *
+   * @param specimen the specimen; not null
+   * @return the builder
+   * @throws NullPointerException if the specimen is null
+   */
+  public static Builder builder(Specimen specimen) {
+    return new Builder(specimen);
+  }
+
+  /**
+   * A builder holding this test's values, to change some of them.
+   *
+   * @return a new builder
+   */
+  public Builder toBuilder() {
+    return builder(specimen)
+        .drainage(drainage)
+        .drainagePathRule(drainagePathRule)
+        .identifiers(identifiers)
+        .increments(increments);
+  }
+
+  /**
+   * The specimen.
+   *
+   * @return the specimen
+   */
+  public Specimen specimen() {
+    return specimen;
+  }
+
+  /**
+   * Drainage of the specimen (both faces by default).
+   *
+   * @return the drainage
+   */
+  public Drainage drainage() {
+    return drainage;
+  }
+
+  /**
+   * The rule for each increment's drainage path.
+   *
+   * @return the rule
+   */
+  public DrainagePathRule drainagePathRule() {
+    return drainagePathRule;
+  }
+
+  /**
+   * Free-text identifiers.
+   *
+   * @return the identifiers
+   */
+  public TestIdentifiers identifiers() {
+    return identifiers;
+  }
+
+  /**
+   * The load increments in the order applied.
+   *
+   * @return an unmodifiable list, at least one element
+   */
+  public List<LoadIncrement> increments() {
+    return increments;
+  }
+
+  /**
+   * Specimen height at the start of an increment.
+   *
+   * @param index increment index, 0-based
+   * @return m
+   * @throws IllegalArgumentException if the index is out of range
+   */
+  public double heightAtStartMetres(int index) {
+    return startHeights[checkIndex(index)];
+  }
+
+  /**
+   * Specimen height at the end (last reading) of an increment.
+   *
+   * @param index increment index, 0-based
+   * @return m
+   * @throws IllegalArgumentException if the index is out of range
+   */
+  public double heightAtEndMetres(int index) {
+    return startHeights[checkIndex(index) + 1];
+  }
+
+  /**
+   * Specimen height at the end of the last increment.
+   *
+   * @return m, &gt; 0
+   */
+  public double finalHeightMetres() {
+    return startHeights[increments.size()];
+  }
+
+  /**
+   * Height of solids H<sub>s</sub>: from the dry mass, or H<sub>f</sub> / (1 + w<sub>f</sub>
+   * G<sub>s</sub>) from the final water content (see {@link Specimen}).
+   *
+   * @return m, &gt; 0 and below every height of the specimen during the test
+   */
+  public double heightOfSolidsMetres() {
+    return heightOfSolids;
+  }
+
+  /**
+   * Void ratio at a specimen height, e = H / H<sub>s</sub> - 1.
+   *
+   * @param heightMetres specimen height, m; finite, &gt; 0
+   * @return dimensionless; may be &le; 0 for a height at or below the height of solids
+   * @throws IllegalArgumentException if the height is not finite and positive, or so large that the
+   *     void ratio overflows
+   */
+  public double voidRatioAtHeight(double heightMetres) {
+    Checks.positive(heightMetres, "height", "m");
+    double e = heightMetres / heightOfSolids - 1;
+    if (!Double.isFinite(e)) {
+      throw new IllegalArgumentException(
+          Checks.format(
+              "height (%s m) is too large for a void ratio", Checks.number(heightMetres)));
+    }
+    return e;
+  }
+
+  /**
+   * Initial void ratio e<sub>0</sub> = H<sub>0</sub> / H<sub>s</sub> - 1.
+   *
+   * @return dimensionless, &gt; 0
+   */
+  public double initialVoidRatio() {
+    return voidRatioAtHeight(startHeights[0]);
+  }
+
+  /**
+   * Void ratio at the end (last reading) of an increment.
+   *
+   * @param index increment index, 0-based
+   * @return dimensionless, &gt; 0
+   * @throws IllegalArgumentException if the index is out of range
+   */
+  public double voidRatioAtEnd(int index) {
+    return voidRatioAtHeight(heightAtEndMetres(index));
+  }
+
+  /**
+   * Initial degree of saturation S<sub>0</sub> = w<sub>0</sub> G<sub>s</sub> / e<sub>0</sub>.
+   * Values a little above 1 are common from measurement error; much above 1 points at a wrong
+   * input.
+   *
+   * @return a ratio (1 for saturated), or empty when no initial water content was given
+   */
+  public OptionalDouble initialDegreeOfSaturation() {
+    OptionalDouble w0 = specimen.initialWaterContent();
+    return w0.isPresent()
+        ? OptionalDouble.of(w0.getAsDouble() * specimen.specificGravity() / initialVoidRatio())
+        : OptionalDouble.empty();
+  }
+
+  /**
+   * Remarks on valid but unusual input (currently those of the specimen).
+   *
+   * @return an unmodifiable list, empty when there is nothing to say
+   */
+  public List<DataWarning> warnings() {
+    return specimen.warnings();
+  }
+
+  private int checkIndex(int index) {
+    if (index < 0 || index >= increments.size()) {
+      throw new IllegalArgumentException(
+          Checks.format("increment index %d is outside 0..%d", index, increments.size() - 1));
+    }
+    return index;
+  }
+
+  @Override
+  public boolean equals(Object o) {
+    if (this == o) {
+      return true;
+    }
+    if (!(o instanceof OedometerTest)) {
+      return false;
+    }
+    OedometerTest t = (OedometerTest) o;
+    return specimen.equals(t.specimen)
+        && drainage == t.drainage
+        && drainagePathRule == t.drainagePathRule
+        && identifiers.equals(t.identifiers)
+        && increments.equals(t.increments);
+  }
+
+  @Override
+  public int hashCode() {
+    return Objects.hash(specimen, drainage, drainagePathRule, identifiers, increments);
+  }
+
+  /**
+   * A one-line summary, e.g. {@code OedometerTest[sample 'S1', 5 increments 0.0 -> 400000.0 Pa,
+   * DOUBLE drainage, HEIGHT_AT_HALF_CONSOLIDATION, H0 0.02 m -> 0.0183 m]}.
+   *
+   * @return the summary
+   */
+  @Override
+  public String toString() {
+    return Checks.format(
+        "OedometerTest[sample '%s', %d increment%s %s -> %s Pa, %s drainage, %s, H0 %s m -> %s"
+            + " m]",
+        identifiers.sample(),
+        increments.size(),
+        increments.size() == 1 ? "" : "s",
+        Checks.brief(increments.get(0).stressBeforePascals()),
+        Checks.brief(increments.get(increments.size() - 1).stressAfterPascals()),
+        drainage,
+        drainagePathRule,
+        Checks.brief(startHeights[0]),
+        Checks.brief(finalHeightMetres()));
+  }
+
+  /**
+   * Collects the parts of an {@link OedometerTest}; {@link #build()} validates them. Not
+   * thread-safe; the test it builds is.
+   */
+  public static final class Builder {
+    private final Specimen specimen;
+    private Drainage drainage = Drainage.DOUBLE;
+    private DrainagePathRule drainagePathRule = DrainagePathRule.HEIGHT_AT_HALF_CONSOLIDATION;
+    private TestIdentifiers identifiers = TestIdentifiers.none();
+    private final List<LoadIncrement> increments = new ArrayList<>();
+
+    private Builder(Specimen specimen) {
+      this.specimen = Objects.requireNonNull(specimen, "specimen must not be null");
+    }
+
+    /**
+     * Sets the drainage (default {@link Drainage#DOUBLE}).
+     *
+     * @param drainage double or single; not null
+     * @return this builder
+     */
+    public Builder drainage(Drainage drainage) {
+      this.drainage = drainage;
+      return this;
+    }
+
+    /**
+     * Sets the drainage path rule (default {@link DrainagePathRule#HEIGHT_AT_HALF_CONSOLIDATION}).
+     *
+     * @param rule the rule; not null
+     * @return this builder
+     */
+    public Builder drainagePathRule(DrainagePathRule rule) {
+      this.drainagePathRule = rule;
+      return this;
+    }
+
+    /**
+     * Sets the identifiers (default all empty).
+     *
+     * @param identifiers the identifiers; not null
+     * @return this builder
+     */
+    public Builder identifiers(TestIdentifiers identifiers) {
+      this.identifiers = identifiers;
+      return this;
+    }
+
+    /**
+     * Appends one increment.
+     *
+     * @param increment the next increment; not null (checked by {@link #build()})
+     * @return this builder
+     */
+    public Builder addIncrement(LoadIncrement increment) {
+      this.increments.add(increment);
+      return this;
+    }
+
+    /**
+     * Replaces the increments.
+     *
+     * @param increments the increments in the order applied; not null
+     * @return this builder
+     */
+    public Builder increments(List<LoadIncrement> increments) {
+      this.increments.clear();
+      this.increments.addAll(increments);
+      return this;
+    }
+
+    /**
+     * Validates and builds the test.
+     *
+     * @return the test
+     * @throws IllegalArgumentException if there is no increment, a stress before differs from the
+     *     stress after the previous increment, the settlements exceed the initial height, or a
+     *     height reaches the height of solids
+     * @throws NullPointerException if the drainage, rule, identifiers or an increment is null
+     */
+    public OedometerTest build() {
+      return new OedometerTest(this);
+    }
+  }
+}

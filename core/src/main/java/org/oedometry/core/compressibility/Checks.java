@@ -1,0 +1,70 @@
+package org.oedometry.core.compressibility;
+
+import java.util.Locale;
+
+/**
+ * Argument checks shared by the package. Every check is written in the negated form so that NaN
+ * fails, and every message names the field, the index where there is one, the value and its unit.
+ */
+final class Checks {
+
+  private Checks() {}
+
+  static double finite(String field, double value, String unit) {
+    if (!Double.isFinite(value)) {
+      throw new IllegalArgumentException(
+          String.format(Locale.ROOT, "%s (%s%s) must be finite", field, value, unit));
+    }
+    return value;
+  }
+
+  static double positive(String field, double value, String unit) {
+    if (!(value > 0) || value == Double.POSITIVE_INFINITY) {
+      throw new IllegalArgumentException(
+          String.format(Locale.ROOT, "%s (%s%s) must be finite and > 0", field, value, unit));
+    }
+    return value;
+  }
+
+  static double nonNegative(String field, double value, String unit) {
+    if (!(value >= 0) || value == Double.POSITIVE_INFINITY) {
+      throw new IllegalArgumentException(
+          String.format(Locale.ROOT, "%s (%s%s) must be finite and >= 0", field, value, unit));
+    }
+    return value;
+  }
+
+  static double positiveAt(String field, int index, double value, String unit) {
+    if (!(value > 0) || value == Double.POSITIVE_INFINITY) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "%s at index %d (%s%s) must be finite and > 0",
+              field,
+              index,
+              value,
+              unit));
+    }
+    return value;
+  }
+
+  static void sameLength(String firstField, int first, String secondField, int second) {
+    if (first != second) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "%s has %d values but %s has %d: the lengths must match",
+              firstField,
+              first,
+              secondField,
+              second));
+    }
+  }
+
+  static <T> T notNull(String field, T value) {
+    if (value == null) {
+      throw new IllegalArgumentException(field + " must not be null");
+    }
+    return value;
+  }
+}

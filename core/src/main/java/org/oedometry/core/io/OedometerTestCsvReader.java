@@ -1,0 +1,608 @@
+package org.oedometry.core.io;
+
+import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Pattern;
+import org.oedometry.core.DrainagePathRule;
+import org.oedometry.core.GaugeConversion;
+import org.oedometry.core.GaugeDirection;
+import org.oedometry.core.LabUnit;
+import org.oedometry.core.LabUnit.Quantity;
+import org.oedometry.core.LoadIncrement;
+import org.oedometry.core.OedometerTest;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.core.Specimen;
+import org.oedometry.core.TestIdentifiers;
+import org.oedometry.core.internal.Checks;
+import org.oedometry.core.io.internal.CsvTable;
+import org.oedometry.core.io.internal.CsvTable.Row;
+import org.oedometry.theory.Drainage;
+
+/**
+ * Reads an {@link OedometerTest} from the three CSV files described in the {@linkplain
+ * org.oedometry.core.io package documentation}: {@value CsvTables#PROPERTIES_FILE}, {@value
+ * CsvTables#INCREMENTS_FILE} and {@value CsvTables#READINGS_FILE}.
+ *
+ * <p>Every value is converted to SI through the unit its header declares ({@link LabUnit}). Reading
+ * is all or nothing: any problem throws a {@link TestDataException} naming the file, line, column
+ * and value, and no test is returned.
+ *
+ * <p>Reading checks the form and consistency of the data, not its truth: results derived from a
+ * test must be reviewed by a qualified engineer, and local codes and standards govern.
+ *
+ * <p>Stateless and thread-safe.
+ */
+public final class OedometerTestCsvReader {
+
+  private static final Pattern INTEGER = Pattern.compile("[0-9]{1,9}");
+  private static final double STRESS_MATCH_TOLERANCE = 1e-9;
+
+  private static final String INCREMENT = "increment";
+  private static final String STRESS_BEFORE = "stress_before";
+  private static final String STRESS_AFTER = "stress_after";
+  private static final String APPARATUS_DEFLECTION = "apparatus_deflection";
+  private static final String ELAPSED = "elapsed";
+  private static final String SETTLEMENT = "settlement";
+  private static final String GAUGE = "gauge";
+
+  private static final String PROPERTIES_HEADER = "property,value";
+  private static final String INCREMENTS_HEADER = "increment,stress_before_kPa,stress_after_kPa";
+  private static final String READINGS_HEADER = "increment,elapsed_min,settlement_mm";
+
+  /** Properties given as a number in a declared unit, with the quantity of that unit. */
+  private static final Map<String, Quantity> UNIT_PROPERTIES =
+      Map.of(
+          "initial_height", Quantity.LENGTH,
+          "diameter", Quantity.LENGTH,
+          "area", Quantity.AREA,
+          "dry_mass", Quantity.MASS,
+          "final_water_content", Quantity.DIMENSIONLESS,
+          "initial_water_content", Quantity.DIMENSIONLESS,
+          "bulk_density", Quantity.DENSITY,
+          "gauge_zero", Quantity.LENGTH);
+
+  /** Properties given as text or as a plain number. */
+  private static final List<String> PLAIN_PROPERTIES =
+      List.of(
+          "specific_gravity",
+          "drainage",
+          "drainage_path_rule",
+          "gauge_direction",
+          "project",
+          "borehole",
+          "sample",
+          "depth");
+
+  private OedometerTestCsvReader() {}
+
+  /**
+   * Reads a test from a directory holding the three files, UTF-8 encoded.
+   *
+   * @param directory the directory
+   * @return the test
+   * @throws IOException if a file cannot be read (missing, unreadable)
+   * @throws TestDataException if a file is not UTF-8 text or does not describe a valid test; the
+   *     source named is the file's path
+   */
+  public static OedometerTest read(Path directory) throws IOException {
+    Path properties = directory.resolve(CsvTables.PROPERTIES_FILE);
+    Path increments = directory.resolve(CsvTables.INCREMENTS_FILE);
+    Path readings = directory.resolve(CsvTables.READINGS_FILE);
+    return parse(
+        properties.toString(),
+        readText(properties),
+        increments.toString(),
+        readText(increments),
+        readings.toString(),
+        readText(readings));
+  }
+
+  private static String readText(Path file) throws IOException {
+    try {
+      return Files.readString(file, StandardCharsets.UTF_8);
+    } catch (CharacterCodingException e) {
+      throw new TestDataException(file.toString(), 0, null, null, "not UTF-8 text", e);
+    }
+  }
+
+  /**
+   * Parses a test from the texts of the three files; messages name the files by their usual names
+   * ({@value CsvTables#PROPERTIES_FILE} and so on).
+   *
+   * @param tables the three texts
+   * @return the test
+   * @throws TestDataException if the texts do not describe a valid test
+   * @throws NullPointerException if tables is null
+   */
+  public static OedometerTest parse(CsvTables tables) {
+    return parse(
+        CsvTables.PROPERTIES_FILE,
+        tables.properties(),
+        CsvTables.INCREMENTS_FILE,
+        tables.increments(),
+        CsvTables.READINGS_FILE,
+        tables.readings());
+  }
+
+  private static OedometerTest parse(
+      String propertiesName,
+      String propertiesText,
+      String incrementsName,
+      String incrementsText,
+      String readingsName,
+      String readingsText) {
+    Properties properties =
+        readProperties(
+            CsvTable.parse(propertiesName, propertiesText, "property", PROPERTIES_HEADER));
+    List<IncrementRow> increments =
+        readIncrements(
+            CsvTable.parse(incrementsName, incrementsText, INCREMENT, INCREMENTS_HEADER));
+    CsvTable readingsTable = CsvTable.parse(readingsName, readingsText, INCREMENT, READINGS_HEADER);
+    List<SettlementCurve> curves = readCurves(readingsTable, increments, properties);
+    List<LoadIncrement> loadIncrements = new ArrayList<>();
+    for (int i = 0; i < increments.size(); i++) {
+      IncrementRow row = increments.get(i);
+      loadIncrements.add(new LoadIncrement(row.before, row.after, curves.get(i)));
+    }
+    try {
+      return OedometerTest.builder(properties.specimen)
+          .drainage(properties.drainage)
+          .drainagePathRule(properties.rule)
+          .identifiers(properties.identifiers)
+          .increments(loadIncrements)
+          .build();
+    } catch (IllegalArgumentException e) {
+      throw new TestDataException(readingsName, 0, null, null, e.getMessage(), e);
+    }
+  }
+
+  // ---------------------------------------------------------------- properties
+
+  /** What the properties file gives. */
+  private static final class Properties {
+    String source;
+    Specimen specimen;
+    Drainage drainage = Drainage.DOUBLE;
+    DrainagePathRule rule = DrainagePathRule.HEIGHT_AT_HALF_CONSOLIDATION;
+    TestIdentifiers identifiers;
+    Double gaugeZeroMetres;
+    GaugeDirection gaugeDirection;
+    Row gaugeRow;
+  }
+
+  private static Properties readProperties(CsvTable table) {
+    if (!String.join(",", table.header().cells()).equals(PROPERTIES_HEADER)) {
+      throw table.error(
+          table.header(),
+          null,
+          String.join(",", table.header().cells()),
+          "the header must be " + PROPERTIES_HEADER);
+    }
+    Map<String, Row> seen = new HashMap<>();
+    Map<String, String> text = new HashMap<>();
+    Map<String, Double> numbers = new HashMap<>();
+    for (Row row : table.rows()) {
+      String key = row.cells().get(0);
+      String cell = row.cells().get(1);
+      String base = baseOf(key);
+      if (base == null) {
+        throw table.error(
+            row,
+            "property",
+            key,
+            "unknown property; known: "
+                + String.join(", ", PLAIN_PROPERTIES)
+                + ", and with a unit: "
+                + String.join(", ", UNIT_PROPERTIES.keySet().stream().sorted().toList()));
+      }
+      Row earlier = seen.put(base, row);
+      if (earlier != null) {
+        throw table.error(
+            row, "property", key, "given twice (also at line " + earlier.line() + ")");
+      }
+      Quantity quantity = UNIT_PROPERTIES.get(base);
+      if (quantity != null) {
+        LabUnit unit = table.unitOf(key, base, quantity, row.line());
+        double value = table.si(row, key, cell, unit);
+        checkPropertyRange(table, row, key, cell, base, value);
+        numbers.put(base, value);
+      } else if (base.equals("specific_gravity")) {
+        double gs = table.number(row, key, cell);
+        try {
+          Checks.specificGravity(gs);
+        } catch (IllegalArgumentException e) {
+          throw table.error(row, key, cell, "must be > 1.0 and <= 6.0");
+        }
+        numbers.put(base, gs);
+      } else {
+        try {
+          text.put(base, Checks.plainText(cell, key));
+        } catch (IllegalArgumentException e) {
+          throw table.error(row, key, cell, e.getMessage());
+        }
+      }
+    }
+    Properties p = new Properties();
+    p.source = table.source();
+    Specimen.Builder b = Specimen.builder();
+    requireProperty(table, seen, "initial_height");
+    requireProperty(table, seen, "specific_gravity");
+    b.initialHeight(numbers.get("initial_height"));
+    b.specificGravity(numbers.get("specific_gravity"));
+    if (numbers.containsKey("diameter")) {
+      b.diameter(numbers.get("diameter"));
+    }
+    if (numbers.containsKey("area")) {
+      b.area(numbers.get("area"));
+    }
+    if (numbers.containsKey("dry_mass")) {
+      b.dryMass(numbers.get("dry_mass"));
+    }
+    if (numbers.containsKey("final_water_content")) {
+      b.finalWaterContent(numbers.get("final_water_content"));
+    }
+    if (numbers.containsKey("initial_water_content")) {
+      b.initialWaterContent(numbers.get("initial_water_content"));
+    }
+    if (numbers.containsKey("bulk_density")) {
+      b.bulkDensity(numbers.get("bulk_density"));
+    }
+    try {
+      p.specimen = b.build();
+    } catch (IllegalArgumentException e) {
+      throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+    }
+    if (text.containsKey("drainage")) {
+      p.drainage = choice(table, seen.get("drainage"), "drainage", Drainage.class);
+    }
+    if (text.containsKey("drainage_path_rule")) {
+      p.rule =
+          choice(
+              table, seen.get("drainage_path_rule"), "drainage_path_rule", DrainagePathRule.class);
+    }
+    if (text.containsKey("gauge_direction")) {
+      p.gaugeDirection =
+          choice(table, seen.get("gauge_direction"), "gauge_direction", GaugeDirection.class);
+    }
+    if (numbers.containsKey("gauge_zero")) {
+      p.gaugeZeroMetres = numbers.get("gauge_zero");
+      p.gaugeRow = seen.get("gauge_zero");
+    } else if (seen.containsKey("gauge_direction")) {
+      p.gaugeRow = seen.get("gauge_direction");
+    }
+    try {
+      p.identifiers =
+          TestIdentifiers.of(
+              text.getOrDefault("project", ""),
+              text.getOrDefault("borehole", ""),
+              text.getOrDefault("sample", ""),
+              text.getOrDefault("depth", ""));
+    } catch (IllegalArgumentException e) {
+      throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+    }
+    return p;
+  }
+
+  private static String baseOf(String key) {
+    if (PLAIN_PROPERTIES.contains(key)) {
+      return key;
+    }
+    for (String base : UNIT_PROPERTIES.keySet()) {
+      if (key.equals(base) || key.startsWith(base + "_")) {
+        return base;
+      }
+    }
+    return null;
+  }
+
+  private static void checkPropertyRange(
+      CsvTable table, Row row, String key, String cell, String base, double value) {
+    if (base.equals("gauge_zero")) {
+      return; // any reading can be the zero of a gauge
+    }
+    boolean zeroAllowed = base.equals("initial_water_content");
+    if (zeroAllowed ? !(value >= 0) : !(value > 0)) {
+      throw table.error(row, key, cell, zeroAllowed ? "must be >= 0" : "must be > 0");
+    }
+  }
+
+  private static void requireProperty(CsvTable table, Map<String, Row> seen, String base) {
+    if (!seen.containsKey(base)) {
+      throw new TestDataException(
+          table.source(),
+          0,
+          null,
+          null,
+          "missing property "
+              + base
+              + (UNIT_PROPERTIES.containsKey(base) ? "_<unit>, e.g. " + base + "_mm" : ""),
+          null);
+    }
+  }
+
+  private static <E extends Enum<E>> E choice(CsvTable table, Row row, String key, Class<E> type) {
+    String cell = row.cells().get(1);
+    for (E e : type.getEnumConstants()) {
+      if (e.name().equalsIgnoreCase(cell)) {
+        return e;
+      }
+    }
+    List<String> names = new ArrayList<>();
+    for (E e : type.getEnumConstants()) {
+      names.add(e.name().toLowerCase(Locale.ROOT));
+    }
+    throw table.error(row, key, cell, "unknown choice; use one of: " + String.join(", ", names));
+  }
+
+  // ---------------------------------------------------------------- increments
+
+  /** One row of the increments file, in SI units. */
+  private record IncrementRow(long line, double before, double after, double deflection) {}
+
+  private static List<IncrementRow> readIncrements(CsvTable table) {
+    List<String> header = table.header().cells();
+    long line = table.header().line();
+    int beforeColumn = -1;
+    int afterColumn = -1;
+    int deflectionColumn = -1;
+    LabUnit[] units = new LabUnit[header.size()];
+    for (int c = 1; c < header.size(); c++) {
+      String name = header.get(c);
+      if (name.equals(STRESS_BEFORE) || name.startsWith(STRESS_BEFORE + "_")) {
+        beforeColumn = c;
+        units[c] = table.unitOf(name, STRESS_BEFORE, Quantity.STRESS, line);
+      } else if (name.equals(STRESS_AFTER) || name.startsWith(STRESS_AFTER + "_")) {
+        afterColumn = c;
+        units[c] = table.unitOf(name, STRESS_AFTER, Quantity.STRESS, line);
+      } else if (name.equals(APPARATUS_DEFLECTION) || name.startsWith(APPARATUS_DEFLECTION + "_")) {
+        deflectionColumn = c;
+        units[c] = table.unitOf(name, APPARATUS_DEFLECTION, Quantity.LENGTH, line);
+      } else {
+        throw table.error(
+            table.header(),
+            name,
+            null,
+            "unknown column; the columns are increment, stress_before_<unit>,"
+                + " stress_after_<unit> and optionally apparatus_deflection_<unit>");
+      }
+    }
+    if (beforeColumn < 0 || afterColumn < 0) {
+      throw table.error(
+          table.header(),
+          null,
+          null,
+          "the header needs the columns stress_before_<unit> and stress_after_<unit>, e.g. "
+              + INCREMENTS_HEADER);
+    }
+    if (table.rows().isEmpty()) {
+      throw new TestDataException(table.source(), 0, null, null, "no increments", null);
+    }
+    List<IncrementRow> rows = new ArrayList<>();
+    for (Row row : table.rows()) {
+      int number = integer(table, row, 0);
+      if (number != rows.size() + 1) {
+        throw table.error(
+            row,
+            INCREMENT,
+            row.cells().get(0),
+            "increments out of order: expected increment " + (rows.size() + 1));
+      }
+      String beforeName = header.get(beforeColumn);
+      String afterName = header.get(afterColumn);
+      String beforeCell = row.cells().get(beforeColumn);
+      String afterCell = row.cells().get(afterColumn);
+      double before = table.si(row, beforeName, beforeCell, units[beforeColumn]);
+      double after = table.si(row, afterName, afterCell, units[afterColumn]);
+      if (!(before >= 0)) {
+        throw table.error(row, beforeName, beforeCell, "stress before must be >= 0");
+      }
+      if (!(after > 0)) {
+        throw table.error(row, afterName, afterCell, "stress after must be > 0");
+      }
+      if (after == before) {
+        throw table.error(
+            row,
+            afterName,
+            afterCell,
+            "stress after equals the stress before: an increment must change the stress");
+      }
+      if (!rows.isEmpty()) {
+        double previousAfter = rows.get(rows.size() - 1).after;
+        if (!(Math.abs(before - previousAfter)
+            <= STRESS_MATCH_TOLERANCE * Math.max(before, previousAfter))) {
+          throw table.error(
+              row,
+              beforeName,
+              beforeCell,
+              Checks.format(
+                  "stress before is not the stress after the previous increment (%s Pa)",
+                  Checks.number(previousAfter)));
+        }
+      }
+      double deflection =
+          deflectionColumn < 0
+              ? 0
+              : table.si(
+                  row,
+                  header.get(deflectionColumn),
+                  row.cells().get(deflectionColumn),
+                  units[deflectionColumn]);
+      rows.add(new IncrementRow(row.line(), before, after, deflection));
+    }
+    return rows;
+  }
+
+  private static int integer(CsvTable table, Row row, int column) {
+    String cell = row.cells().get(column);
+    if (!INTEGER.matcher(cell).matches() || Integer.parseInt(cell) < 1) {
+      throw table.error(row, INCREMENT, cell, "not an increment number (a whole number >= 1)");
+    }
+    return Integer.parseInt(cell);
+  }
+
+  // ---------------------------------------------------------------- readings
+
+  private static List<SettlementCurve> readCurves(
+      CsvTable table, List<IncrementRow> increments, Properties properties) {
+    List<String> header = table.header().cells();
+    long line = table.header().line();
+    if (header.size() != 3) {
+      throw table.error(
+          table.header(),
+          null,
+          String.join(",", header),
+          "the header needs three columns: increment, elapsed_<unit> and settlement_<unit> or"
+              + " gauge_<unit>, e.g. "
+              + READINGS_HEADER);
+    }
+    String timeName = header.get(1);
+    if (!(timeName.equals(ELAPSED) || timeName.startsWith(ELAPSED + "_"))) {
+      throw table.error(
+          table.header(), timeName, null, "the second column must be elapsed_<time unit>");
+    }
+    LabUnit timeUnit = table.unitOf(timeName, ELAPSED, Quantity.TIME, line);
+    String valueName = header.get(2);
+    boolean gauge;
+    LabUnit valueUnit;
+    if (valueName.equals(SETTLEMENT) || valueName.startsWith(SETTLEMENT + "_")) {
+      gauge = false;
+      valueUnit = table.unitOf(valueName, SETTLEMENT, Quantity.LENGTH, line);
+    } else if (valueName.equals(GAUGE) || valueName.startsWith(GAUGE + "_")) {
+      gauge = true;
+      valueUnit = table.unitOf(valueName, GAUGE, Quantity.LENGTH, line);
+    } else {
+      throw table.error(
+          table.header(),
+          valueName,
+          null,
+          "the third column must be settlement_<length unit> or gauge_<length unit>");
+    }
+    if (gauge && (properties.gaugeZeroMetres == null || properties.gaugeDirection == null)) {
+      throw table.error(
+          table.header(),
+          valueName,
+          null,
+          "gauge readings need the properties gauge_zero_<unit> and gauge_direction");
+    }
+    if (!gauge && properties.gaugeRow != null) {
+      throw new TestDataException(
+          properties.source,
+          properties.gaugeRow.line(),
+          properties.gaugeRow.cells().get(0),
+          null,
+          "gauge properties are given but the readings are settlements (" + valueName + ")",
+          null);
+    }
+    int n = increments.size();
+    List<List<double[]>> perIncrement = new ArrayList<>();
+    List<Row> lastRow = new ArrayList<>();
+    for (int i = 0; i < n; i++) {
+      perIncrement.add(new ArrayList<>());
+      lastRow.add(null);
+    }
+    int current = 0;
+    for (Row row : table.rows()) {
+      int number = integer(table, row, 0);
+      if (number > n) {
+        throw table.error(
+            row,
+            INCREMENT,
+            row.cells().get(0),
+            "no such increment: the increments file lists " + n);
+      }
+      if (number < current) {
+        throw table.error(
+            row,
+            INCREMENT,
+            row.cells().get(0),
+            "readings out of order: the readings of increment " + current + " come before");
+      }
+      if (number > current + 1) {
+        throw table.error(
+            row, INCREMENT, row.cells().get(0), "increment " + (current + 1) + " has no readings");
+      }
+      current = number;
+      String timeCell = row.cells().get(1);
+      double t = table.si(row, timeName, timeCell, timeUnit);
+      if (!(t >= 0)) {
+        throw table.error(row, timeName, timeCell, "elapsed time must be >= 0");
+      }
+      Row previous = lastRow.get(number - 1);
+      List<double[]> readings = perIncrement.get(number - 1);
+      if (previous != null) {
+        double tPrevious = readings.get(readings.size() - 1)[0];
+        if (t == tPrevious) {
+          throw table.error(
+              row,
+              timeName,
+              timeCell,
+              "duplicate elapsed time (also at line " + previous.line() + ")");
+        }
+        if (t < tPrevious) {
+          throw table.error(
+              row,
+              timeName,
+              timeCell,
+              "elapsed time is before that of the previous reading (line " + previous.line() + ")");
+        }
+      }
+      double value = table.si(row, valueName, row.cells().get(2), valueUnit);
+      readings.add(new double[] {t, value});
+      lastRow.set(number - 1, row);
+    }
+    if (current < n) {
+      throw new TestDataException(
+          table.source(), 0, null, null, "increment " + (current + 1) + " has no readings", null);
+    }
+    List<double[]> times = new ArrayList<>();
+    List<double[]> values = new ArrayList<>();
+    for (int i = 0; i < n; i++) {
+      List<double[]> readings = perIncrement.get(i);
+      if (readings.size() < 2) {
+        throw table.error(
+            lastRow.get(i),
+            INCREMENT,
+            String.valueOf(i + 1),
+            "increment " + (i + 1) + " has 1 reading; a settlement curve needs at least 2");
+      }
+      double[] t = new double[readings.size()];
+      double[] v = new double[readings.size()];
+      for (int j = 0; j < t.length; j++) {
+        t[j] = readings.get(j)[0];
+        v[j] = readings.get(j)[1];
+      }
+      times.add(t);
+      values.add(v);
+    }
+    double[] deflection = new double[n];
+    for (int i = 0; i < n; i++) {
+      deflection[i] = increments.get(i).deflection;
+    }
+    try {
+      if (gauge) {
+        return GaugeConversion.of(LabUnit.METRE, properties.gaugeDirection)
+            .curves(properties.gaugeZeroMetres, times, values, deflection);
+      }
+      List<SettlementCurve> curves = new ArrayList<>();
+      for (int i = 0; i < n; i++) {
+        double change = deflection[i] - (i == 0 ? 0 : deflection[i - 1]);
+        double[] v = values.get(i);
+        for (int j = 0; j < v.length; j++) {
+          v[j] -= change;
+        }
+        curves.add(SettlementCurve.of(times.get(i), v));
+      }
+      return curves;
+    } catch (IllegalArgumentException e) {
+      throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+    }
+  }
+}

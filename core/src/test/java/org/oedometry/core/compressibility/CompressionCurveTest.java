@@ -1,0 +1,122 @@
+package org.oedometry.core.compressibility;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+class CompressionCurveTest {
+
+  private static final SpecimenPhases PHASES = SpecimenPhases.fromInitialVoidRatio(0.020, 1.0);
+
+  @Test
+  @DisplayName("From settlements: e = e0 - (1 + e0) dH / H0 on the selected basis (FACTS)")
+  void fromDeformationsUsesTheSelectedBasis() {
+    List<IncrementDeformation> incs =
+        List.of(
+            IncrementDeformation.of(50e3, 0.0004, 0.0003),
+            IncrementDeformation.of(100e3, 0.0010, 0.0009));
+    CompressionCurve end =
+        CompressionCurve.fromDeformations(PHASES, 0, incs, DeformationBasis.END_OF_INCREMENT);
+    CompressionCurve primary =
+        CompressionCurve.fromDeformations(PHASES, 0, incs, DeformationBasis.END_OF_PRIMARY);
+    // Hand arithmetic with e0 = 1, H0 = 20 mm: e = 1 - 2 dH / 0.02.
+    assertThat(end.voidRatio(0)).isCloseTo(1 - 2 * 0.0004 / 0.02, within(1e-14));
+    assertThat(end.voidRatio(1)).isCloseTo(1 - 2 * 0.0010 / 0.02, within(1e-14));
+    assertThat(primary.voidRatio(0)).isCloseTo(1 - 2 * 0.0003 / 0.02, within(1e-14));
+    assertThat(primary.voidRatio(1)).isCloseTo(1 - 2 * 0.0009 / 0.02, within(1e-14));
+    assertThat(end.axialStrain(1)).isCloseTo(0.0010 / 0.020, within(1e-15));
+    assertThat(end.initialVoidRatio()).isCloseTo(1.0, within(1e-15));
+    assertThat(end.startStress(0)).isZero();
+    assertThat(end.startVoidRatio(0)).isCloseTo(1.0, within(1e-15));
+    assertThat(end.startStress(1)).isEqualTo(50e3);
+  }
+
+  @Test
+  @DisplayName("Arrays are copied in; equal curves are equal; toString is readable")
+  void valueSemantics() {
+    double[] s = {50e3, 100e3};
+    double[] e = {0.70, 0.65};
+    CompressionCurve c = CompressionCurve.of(0.75, s, e);
+    s[0] = 1;
+    e[0] = 9;
+    assertThat(c.stress(0)).isEqualTo(50e3);
+    assertThat(c.voidRatio(0)).isEqualTo(0.70);
+    CompressionCurve same =
+        CompressionCurve.of(0.75, new double[] {50e3, 100e3}, new double[] {0.70, 0.65});
+    assertThat(c).isEqualTo(same);
+    assertThat(c.hashCode()).isEqualTo(same.hashCode());
+    assertThat(c.toString())
+        .isEqualTo(
+            "CompressionCurve[e0=0.75, seating=0.0 Pa, points=(50000.0 Pa, e=0.7), (100000.0 Pa,"
+                + " e=0.65)]");
+  }
+
+  @Test
+  @DisplayName("Bad input catalogue: each message names the field, the index and the value")
+  void badInput() {
+    assertThatThrownBy(
+            () -> CompressionCurve.of(0.8, new double[] {1e3, Double.NaN}, new double[] {1, 1}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("effective stress at index 1 (NaN Pa) must be finite and > 0");
+    assertThatThrownBy(() -> CompressionCurve.of(0.8, new double[] {-5e3}, new double[] {0.7}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("effective stress at index 0 (-5000.0 Pa) must be finite and > 0");
+    assertThatThrownBy(() -> CompressionCurve.of(0.8, new double[] {1e3, 2e3}, new double[] {0.7}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "effective stresses has 2 values but void ratios has 1: the lengths must match");
+    assertThatThrownBy(
+            () -> CompressionCurve.of(0.8, new double[] {1e3, 1e3}, new double[] {0.7, 0.69}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "effective stress at index 1 (1000.0 Pa) equals index 0 (1000.0 Pa): consecutive"
+                + " increments must change the stress");
+    assertThatThrownBy(() -> CompressionCurve.of(0.8, new double[0], new double[0]))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("compression curve needs at least one point (0 given)");
+    assertThatThrownBy(() -> CompressionCurve.of(0.8, 2e3, new double[] {1e3}, new double[] {0.7}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "effective stress at index 0 (1000.0 Pa) must exceed the seating stress (2000.0 Pa)");
+    assertThatThrownBy(
+            () -> CompressionCurve.of(Double.NaN, new double[] {1e3}, new double[] {0.7}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("initial void ratio (NaN) must be finite and > 0");
+    assertThatThrownBy(() -> CompressionCurve.of(0.8, new double[] {1e3}, new double[] {0.0}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("void ratio at index 0 (0.0) must be finite and > 0");
+    assertThatThrownBy(
+            () ->
+                CompressionCurve.fromDeformations(
+                    PHASES,
+                    0,
+                    List.of(IncrementDeformation.of(10e3, 0.0001)),
+                    DeformationBasis.END_OF_PRIMARY))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("end-of-primary settlement at index 0 (stress 10000.0 Pa) is not known");
+    assertThatThrownBy(
+            () ->
+                CompressionCurve.fromDeformations(
+                    PHASES,
+                    0,
+                    List.of(
+                        IncrementDeformation.of(10e3, 0.0001),
+                        IncrementDeformation.of(20e3, 0.011)),
+                    DeformationBasis.END_OF_INCREMENT))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "increment at index 1: settlement (0.011 m) must be below initial height minus"
+                + " height of solids (0.01 m)");
+    assertThatThrownBy(() -> IncrementDeformation.of(10e3, Double.NaN))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("end-of-increment settlement (NaN m) must be finite");
+    CompressionCurve ok = CompressionCurve.of(0.8, new double[] {1e3}, new double[] {0.7});
+    assertThatThrownBy(() -> ok.voidRatio(1))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("point index 1 is outside 0..0");
+  }
+}

@@ -1,0 +1,136 @@
+package org.oedometry.core.compressibility;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+class PachecoSilvaMethodTest {
+
+  private static final double CR = 0.04;
+  private static final double CC = 0.40;
+
+  @ParameterizedTest(name = "break at {0} Pa")
+  @ValueSource(doubles = {100e3, 150e3, 210e3})
+  @DisplayName(
+      "Sharp two-line curve (invented): log10 s'_p = xb - (Cr/Cc)^2 (xb - x0), the closed form of"
+          + " the construction on two straight lines (derived by hand from the construction)")
+  void sharpBreakClosedForm(double breakStress) {
+    // e0 lies on the recompression line at 1 kPa, so x0 = 3 (log10 of 1000 Pa).
+    CompressionCurve c =
+        SyntheticCurves.curve(SyntheticCurves.DOUBLING_STRESSES, breakStress, 1.0, CR, CC, 0, 1e3);
+    PreconsolidationEstimate est = PachecoSilvaMethod.estimate(c);
+    double xb = Math.log10(breakStress);
+    double expected = Math.pow(10, xb - (CR / CC) * (CR / CC) * (xb - 3));
+    assertThat(est.preconsolidationPressure().getAsDouble() / expected)
+        .isCloseTo(1.0, within(1e-12));
+    // With Cr/Cc = 0.1 the construction is low by 1 % of a log cycle per log cycle of (xb - x0):
+    // here 4.5 % to 5.2 %.
+    assertThat(est.preconsolidationPressure().getAsDouble() / breakStress).isBetween(0.94, 0.96);
+  }
+
+  @Test
+  @DisplayName(
+      "Flat recompression line (Cr = 0, invented) with the break at a test stress: the break"
+          + " exactly (A, B and C coincide at the corner)")
+  void flatRecompression() {
+    // With the break between two test stresses the straight chord between them cuts the corner,
+    // B falls below A and the result moves right; the closed form above then does not apply.
+    CompressionCurve c =
+        SyntheticCurves.curve(SyntheticCurves.DOUBLING_STRESSES, 100e3, 1.0, 0, CC, 0, 1e3);
+    assertThat(PachecoSilvaMethod.estimate(c).preconsolidationPressure().getAsDouble())
+        .isCloseTo(100e3, within(1e-6));
+  }
+
+  @ParameterizedTest(name = "break at {0} Pa")
+  @ValueSource(doubles = {100e3, 150e3, 210e3})
+  @DisplayName(
+      "Smooth transition w = 0.05 log cycle (invented): within 6 % of the break (closed-form"
+          + " bias -5 % plus the rounding of the corner, which raises point B)")
+  void smoothBreak(double breakStress) {
+    CompressionCurve c =
+        SyntheticCurves.curve(
+            SyntheticCurves.DOUBLING_STRESSES, breakStress, 1.0, CR, CC, 0.05, 1e3);
+    PreconsolidationEstimate est = PachecoSilvaMethod.estimate(c);
+    assertThat(est.preconsolidationPressure().getAsDouble() / breakStress)
+        .isCloseTo(1.0, within(0.06));
+    assertThat(est.warnings()).isEmpty();
+  }
+
+  @Test
+  @DisplayName("Construction geometry: A at e0 on the virgin line, B below it, C level with B")
+  void constructionGeometry() {
+    CompressionCurve c =
+        SyntheticCurves.curve(SyntheticCurves.DOUBLING_STRESSES, 150e3, 1.0, CR, CC, 0, 1e3);
+    PreconsolidationEstimate est = PachecoSilvaMethod.estimate(c);
+    assertThat(est.points()).hasSize(3);
+    ConstructionPoint a = est.points().get(0);
+    ConstructionPoint b = est.points().get(1);
+    ConstructionPoint p = est.points().get(2);
+    assertThat(a.y()).isEqualTo(c.initialVoidRatio());
+    assertThat(b.x()).isEqualTo(a.x());
+    assertThat(b.y()).isLessThan(a.y());
+    assertThat(p.y()).isEqualTo(b.y());
+    assertThat(Math.pow(10, p.x()))
+        .isCloseTo(est.preconsolidationPressure().getAsDouble(), within(1e-6));
+    assertThat(est.lines())
+        .extracting(ConstructionLine::label)
+        .containsExactly(
+            "virgin line",
+            "initial void ratio",
+            "vertical to the curve",
+            "horizontal to the virgin line");
+  }
+
+  @Test
+  @DisplayName("Absent with a reason: too few points, virgin line not falling, A before the data")
+  void absentCases() {
+    PreconsolidationEstimate few =
+        PachecoSilvaMethod.estimate(
+            CompressionCurve.of(
+                1.0, new double[] {100e3, 200e3, 400e3}, new double[] {0.9, 0.8, 0.7}));
+    assertThat(few.absenceReason())
+        .isEqualTo(
+            "the loading envelope has 3 points; the construction needs 3 for the virgin line and"
+                + " at least one before it");
+    PreconsolidationEstimate rising =
+        PachecoSilvaMethod.estimate(
+            CompressionCurve.of(
+                1.0,
+                new double[] {50e3, 100e3, 200e3, 400e3},
+                new double[] {0.9, 0.91, 0.92, 0.93}));
+    assertThat(rising.preconsolidationPressure()).isEmpty();
+    assertThat(rising.absenceReason()).startsWith("the virgin line does not fall with stress");
+    // Loading starts at 100 kPa: A (at 90.8 kPa for a break at 150 kPa) lies before the data.
+    double[] late = {100e3, 200e3, 400e3, 800e3, 1600e3};
+    PreconsolidationEstimate early =
+        PachecoSilvaMethod.estimate(SyntheticCurves.curve(late, 150e3, 1.0, CR, CC, 0, 1e3));
+    assertThat(early.preconsolidationPressure()).isEmpty();
+    assertThat(early.absenceReason()).contains("outside the loaded range");
+    assertThatThrownBy(() -> PachecoSilvaMethod.estimate(null))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("compression curve must not be null");
+  }
+
+  @Test
+  @DisplayName("Options: the virgin line through more points changes nothing on exact data")
+  void options() {
+    CompressionCurve c =
+        SyntheticCurves.curve(SyntheticCurves.DOUBLING_STRESSES, 150e3, 1.0, CR, CC, 0, 1e3);
+    double three = PachecoSilvaMethod.estimate(c).preconsolidationPressure().getAsDouble();
+    double four =
+        PachecoSilvaMethod.estimate(
+                c, PreconsolidationOptions.builder().virginLinePoints(4).build())
+            .preconsolidationPressure()
+            .getAsDouble();
+    assertThat(four / three).isCloseTo(1.0, within(1e-12));
+    assertThat(PreconsolidationOptions.defaults().virginLinePoints()).isEqualTo(3);
+    assertThatThrownBy(() -> PreconsolidationOptions.builder().virginLinePoints(1).build())
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("virgin line points (1) must be >= 2");
+  }
+}
