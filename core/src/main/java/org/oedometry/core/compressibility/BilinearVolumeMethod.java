@@ -3,6 +3,7 @@ package org.oedometry.core.compressibility;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 /**
  * Preconsolidation pressure as the intersection of two straight lines on the log(1 + e) &ndash; log
@@ -87,25 +88,8 @@ public final class BilinearVolumeMethod {
       x[i] = natural ? Math.log(env.stress[i]) : Math.log10(env.stress[i]);
       y[i] = natural ? Math.log1p(env.voidRatio[i]) : Math.log1p(env.voidRatio[i]) / Math.log(10);
     }
-    int bestSplit = -1;
-    double bestRss = Double.POSITIVE_INFINITY;
-    LineFit bestEarly = null;
-    LineFit bestLate = null;
-    for (int k = 2; k <= n - 2; k++) {
-      LineFit early = LineFit.through(x, y, 0, k);
-      LineFit late = LineFit.through(x, y, k, n);
-      if (!(late.slope() < early.slope())) {
-        continue;
-      }
-      double rss = early.residualSumOfSquares(x, y, 0, k) + late.residualSumOfSquares(x, y, k, n);
-      if (rss < bestRss) {
-        bestRss = rss;
-        bestSplit = k;
-        bestEarly = early;
-        bestLate = late;
-      }
-    }
-    if (bestSplit < 0) {
+    Optional<TwoLineSplit> found = TwoLineSplit.best(x, y, TwoLineSplit.Bend.DOWN);
+    if (found.isEmpty()) {
       return PreconsolidationEstimate.absent(
           method,
           "no split of the loading points gives a later line steeper than the earlier one: the"
@@ -116,10 +100,13 @@ public final class BilinearVolumeMethod {
           env.idList(0, n),
           warnings);
     }
+    TwoLineSplit two = found.get();
+    int bestSplit = two.split();
+    LineFit bestEarly = two.early();
+    LineFit bestLate = two.late();
     LoadingEnvelope.lineWarnings("the early line", bestEarly, warnings);
     LoadingEnvelope.lineWarnings("the late line", bestLate, warnings);
-    double xi =
-        (bestLate.intercept() - bestEarly.intercept()) / (bestEarly.slope() - bestLate.slope());
+    double xi = two.intersection();
     double yi = bestEarly.valueAt(xi);
     double pressure = natural ? Math.exp(xi) : Math.pow(10, xi);
     if (!(pressure > 0) || Double.isInfinite(pressure)) {

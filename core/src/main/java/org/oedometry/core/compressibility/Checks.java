@@ -11,27 +11,15 @@ final class Checks {
   private Checks() {}
 
   static double finite(String field, double value, String unit) {
-    if (!Double.isFinite(value)) {
-      throw new IllegalArgumentException(
-          String.format(Locale.ROOT, "%s (%s%s) must be finite", field, value, unit));
-    }
-    return value;
+    return org.oedometry.core.internal.Checks.finite(value, field, unit);
   }
 
   static double positive(String field, double value, String unit) {
-    if (!(value > 0) || value == Double.POSITIVE_INFINITY) {
-      throw new IllegalArgumentException(
-          String.format(Locale.ROOT, "%s (%s%s) must be finite and > 0", field, value, unit));
-    }
-    return value;
+    return org.oedometry.core.internal.Checks.positive(value, field, unit);
   }
 
   static double nonNegative(String field, double value, String unit) {
-    if (!(value >= 0) || value == Double.POSITIVE_INFINITY) {
-      throw new IllegalArgumentException(
-          String.format(Locale.ROOT, "%s (%s%s) must be finite and >= 0", field, value, unit));
-    }
-    return value;
+    return org.oedometry.core.internal.Checks.nonNegative(value, field, unit);
   }
 
   static double positiveAt(String field, int index, double value, String unit) {
@@ -39,11 +27,10 @@ final class Checks {
       throw new IllegalArgumentException(
           String.format(
               Locale.ROOT,
-              "%s at index %d (%s%s) must be finite and > 0",
+              "%s at index %d (%s) must be finite and > 0",
               field,
               index,
-              value,
-              unit));
+              org.oedometry.core.internal.Checks.withUnit(value, unit)));
     }
     return value;
   }

@@ -3,6 +3,7 @@ package org.oedometry.core.compressibility;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 /**
  * Preconsolidation pressure by the work method of Becker et al. (1987): two straight lines on the
@@ -83,25 +84,8 @@ public final class WorkMethod {
       previousStress = stress;
       previousStrain = strain;
     }
-    int bestSplit = -1;
-    double bestRss = Double.POSITIVE_INFINITY;
-    LineFit bestEarly = null;
-    LineFit bestLate = null;
-    for (int k = 2; k <= n - 2; k++) {
-      LineFit early = LineFit.through(x, w, 0, k);
-      LineFit late = LineFit.through(x, w, k, n);
-      if (!(late.slope() > early.slope())) {
-        continue;
-      }
-      double rss = early.residualSumOfSquares(x, w, 0, k) + late.residualSumOfSquares(x, w, k, n);
-      if (rss < bestRss) {
-        bestRss = rss;
-        bestSplit = k;
-        bestEarly = early;
-        bestLate = late;
-      }
-    }
-    if (bestSplit < 0) {
+    Optional<TwoLineSplit> found = TwoLineSplit.best(x, w, TwoLineSplit.Bend.UP);
+    if (found.isEmpty()) {
       return PreconsolidationEstimate.absent(
           method,
           "no split of the loading points gives a later work line steeper than the earlier one:"
@@ -112,10 +96,13 @@ public final class WorkMethod {
           used,
           warnings);
     }
+    TwoLineSplit two = found.get();
+    int bestSplit = two.split();
+    LineFit bestEarly = two.early();
+    LineFit bestLate = two.late();
     LoadingEnvelope.lineWarnings("the early line", bestEarly, warnings);
     LoadingEnvelope.lineWarnings("the late line", bestLate, warnings);
-    double pressure =
-        (bestLate.intercept() - bestEarly.intercept()) / (bestEarly.slope() - bestLate.slope());
+    double pressure = two.intersection();
     if (!(pressure > 0) || Double.isInfinite(pressure)) {
       return PreconsolidationEstimate.absent(
           method,

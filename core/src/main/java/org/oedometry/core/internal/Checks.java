@@ -41,6 +41,19 @@ public final class Checks {
   }
 
   /**
+   * A value followed by its unit symbol, or the value alone where the unit is empty
+   * (dimensionless).
+   *
+   * @param value any double
+   * @param unit a unit symbol, possibly empty
+   * @return for example {@code "0.02 m"} or {@code "0.5"}
+   */
+  public static String withUnit(double value, String unit) {
+    String symbol = unit.strip();
+    return symbol.isEmpty() ? number(value) : number(value) + " " + symbol;
+  }
+
+  /**
    * Formats a message with {@link Locale#ROOT}.
    *
    * @param template a {@link String#format} template
@@ -63,7 +76,7 @@ public final class Checks {
   public static double finite(double value, String name, String unit) {
     if (!Double.isFinite(value)) {
       throw new IllegalArgumentException(
-          format("%s (%s %s) must be finite", name, number(value), unit));
+          format("%s (%s) must be finite", name, withUnit(value, unit)));
     }
     return value;
   }
@@ -80,7 +93,7 @@ public final class Checks {
   public static double positive(double value, String name, String unit) {
     if (!(value > 0) || value == Double.POSITIVE_INFINITY) {
       throw new IllegalArgumentException(
-          format("%s (%s %s) must be finite and > 0", name, number(value), unit));
+          format("%s (%s) must be finite and > 0", name, withUnit(value, unit)));
     }
     return value;
   }
@@ -97,7 +110,7 @@ public final class Checks {
   public static double nonNegative(double value, String name, String unit) {
     if (!(value >= 0) || value == Double.POSITIVE_INFINITY) {
       throw new IllegalArgumentException(
-          format("%s (%s %s) must be finite and >= 0", name, number(value), unit));
+          format("%s (%s) must be finite and >= 0", name, withUnit(value, unit)));
     }
     return value + 0.0;
   }
