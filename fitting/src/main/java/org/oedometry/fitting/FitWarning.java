@@ -1,0 +1,75 @@
+package org.oedometry.fitting;
+
+import java.util.Objects;
+
+/**
+ * A doubt about a result that still carries a value: a kind a program can test and a message an
+ * engineer can read. A warning never replaces an error: where no honest value exists the methods
+ * throw {@link FitException} instead.
+ *
+ * @param kind what kind of doubt; not null
+ * @param message the details, with the numbers involved; not blank
+ */
+public record FitWarning(Kind kind, String message) {
+
+  /** Kinds of warning raised by the constructions of this package. */
+  public enum Kind {
+    /** The reading at t = 0 was left out of the construction (it may hold a false deformation). */
+    ZERO_READING_IGNORED,
+    /** Settlement decreases: a swelling (unloading) increment, usually reported for information. */
+    SWELLING_INCREMENT,
+    /** Fewer early readings than the log-time parabola rule wants; d0 is less certain. */
+    FEW_EARLY_READINGS,
+    /** The log-time secondary line rests on fewer than 3 readings. */
+    FEW_SECONDARY_READINGS,
+    /** The log-time secondary readings span too short a time to fix the line's slope. */
+    SHORT_SECONDARY_PART,
+    /** t50 lies before the first reading and was extrapolated by the square-root law. */
+    T50_OUTSIDE_READINGS,
+    /** The readings chosen for the root-time early line do not lie on a straight line. */
+    EARLY_PART_NOT_LINEAR,
+    /** The root-time choice of early readings did not settle to one set. */
+    LINE_CHOICE_NOT_SETTLED,
+    /** The readings keep rising well beyond the implied d100 (strong secondary compression). */
+    CURVE_RISES_BEYOND_D100,
+    /** A fitted parameter sits on its bound (no primary, or no secondary compression). */
+    PARAMETER_AT_BOUND,
+    /** The confidence interval of c<sub>v</sub> spans more than a factor of 2. */
+    WIDE_INTERVAL,
+    /** The residuals run in long same-sign stretches: the model misses part of the curve. */
+    RESIDUALS_SHOW_STRUCTURE,
+    /**
+     * T at the last reading is below 1 for the lower end of the c<sub>v</sub> interval: primary
+     * consolidation may not be complete.
+     */
+    PRIMARY_INCOMPLETE,
+    /** Fewer than half the least-squares starts reached the best fit. */
+    STARTS_DISAGREE
+  }
+
+  /**
+   * Creates a warning.
+   *
+   * @param kind what kind of doubt; not null
+   * @param message the details; not blank
+   * @throws IllegalArgumentException if kind is null or message is null or blank
+   */
+  public FitWarning {
+    if (kind == null) {
+      throw new IllegalArgumentException("warning kind must not be null");
+    }
+    if (message == null || message.isBlank()) {
+      throw new IllegalArgumentException("warning message must not be blank (kind " + kind + ")");
+    }
+  }
+
+  /**
+   * Whether this warning is of the given kind.
+   *
+   * @param other a kind
+   * @return true if {@link #kind()} equals it
+   */
+  public boolean is(Kind other) {
+    return Objects.equals(kind, other);
+  }
+}

@@ -1,0 +1,620 @@
+package org.oedometry.fitting;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.apache.commons.math3.distribution.TDistribution;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.LUDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.internal.Checks;
+import org.oedometry.fitting.internal.WeightedLeastSquares;
+import org.oedometry.theory.ConsolidationCurveModel;
+import org.oedometry.theory.CurveParameters;
+
+/**
+ * Least-squares fit of the whole time-settlement curve of one increment to Terzaghi's theory with
+ * secondary compression ({@link ConsolidationCurveModel}: d(t) = d<sub>i</sub> + d<sub>p</sub> U(T)
+ * + s log<sub>10</sub>(1 + T/T<sub>s</sub>)), with a confidence interval on c<sub>v</sub>; after
+ * Barros &amp; Pinto (2008, Geotechnical Testing Journal 31(1)), who fit initial, primary and
+ * secondary compression together (from the abstract; the secondary term here is our own, documented
+ * in the model).
+ *
+ * <h2>Procedure</h2>
+ *
+ * <ol>
+ *   <li>The reading at t = 0 (if any) is left out; it may hold the instantaneous (false)
+ *       deformation, which d<sub>i</sub> absorbs. A swelling increment (final reading below the
+ *       first) is fitted on the magnitude and reported in the input's sign.
+ *   <li>Weights ({@link FullCurveOptions.ReadingWeights}): by default each reading weighs the span
+ *       of log t it represents, normalised to a mean of 1.
+ *   <li>Starts: for 31 trial values of c<sub>v</sub>, log-spaced so that T at the last reading runs
+ *       from 0.02 to 20 000, the model is linear in (d<sub>i</sub>, d<sub>p</sub>, s) and is solved
+ *       exactly under d<sub>p</sub> &ge; 0, s &ge; 0 (a profile of the residual over c<sub>v
+ *       </sub>). The lowest local minima of that profile (up to three, each within a factor of 4 of
+ *       the lowest residual, and with a primary settlement) start Levenberg-Marquardt
+ *       (commons-math3, analytic Jacobian from {@link ConsolidationCurveModel}, parameters
+ *       d<sub>i</sub>, d<sub>p</sub>, ln c<sub>v</sub>, s, with d<sub>p</sub> &ge; 0 and s &ge; 0
+ *       in the direction of movement: a large primary term cancelled by a negative secondary term
+ *       cannot mimic a slow curve). The best fit is kept; the result says how many starts reached
+ *       it.
+ *   <li>Interval: the standard error of ln c<sub>v</sub> from the covariance of the parameters,
+ *       with the readings' noise variance estimated from the unweighted residuals (&Sigma;r<sup>2
+ *       </sup>/(n - p)), by the sandwich A<sup>-1</sup>BA<sup>-1</sup> (A = J<sup>T</sup>WJ, B =
+ *       J<sup>T</sup>W<sup>2</sup>J; A<sup>-1</sup> alone for unit weights), then widened for
+ *       residuals that follow each other (lag-1 autocorrelation &rho; &gt; 0, a sign of model error
+ *       such as creep the secondary term does not follow) by the factor &radic;((1 + &rho;)/(1 -
+ *       &rho;)) of an AR(1) series; the interval is exp(ln c<sub>v</sub> &plusmn; t<sub>n-p</sub>
+ *       SE) with Student's t.
+ * </ol>
+ *
+ * <h2>Warnings and errors</h2>
+ *
+ * Warnings: swelling increment, parameter at a bound, interval wider than a factor of 2, residuals
+ * with structure (a runs test on their signs, z &lt; -2.58), primary consolidation incomplete (T at
+ * the last reading below 1 for the lower end of the c<sub>v</sub> interval: c<sub>v</sub> then
+ * rests on an unfinished curve and must not be used without review), fewer than half the starts at
+ * the best fit. {@link FitException}: the readings do not move, primary consolidation was over
+ * before the first reading or is not seen at all (c<sub>v</sub> at the edge of the search), or the
+ * optimiser failed from every start.
+ *
+ * <p>Deterministic (same readings, same bits) and thread-safe. Results feed engineering decisions
+ * and must be reviewed by a qualified engineer; local codes and standards govern.
+ */
+public final class FullCurveMethod {
+
+  /** Trial c<sub>v</sub> values of the profile. */
+  private static final int PROFILE_POINTS = 31;
+
+  /** Range of T at the last reading covered by the profile. */
+  private static final double PROFILE_LOWEST_END_FACTOR = 0.02;
+
+  private static final double PROFILE_HIGHEST_END_FACTOR = 20_000;
+
+  /** Bounds of T at the last reading that the fit may reach; beyond them c_v is not seen. */
+  private static final double LOWEST_END_FACTOR = 1e-4;
+
+  private static final double HIGHEST_END_FACTOR = 1e7;
+
+  private static final int MAX_STARTS = 3;
+
+  /** A profile minimum whose residual exceeds the lowest by more than this is not a start. */
+  private static final double START_RESIDUAL_FACTOR = 4.0;
+
+  private static final int CURVE_POINTS = 100;
+
+  private static final double RUNS_TEST_CRITICAL_Z = -2.576;
+
+  private FullCurveMethod() {}
+
+  /**
+   * Fits with {@link FullCurveOptions#defaults()}.
+   *
+   * @param curve one increment's readings
+   * @param drainagePathMetres H<sub>dr</sub>, m; finite and &gt; 0
+   * @return the fit
+   * @throws IllegalArgumentException if the drainage path is not finite and positive, or there are
+   *     too few readings after t = 0 for the parameters
+   * @throws FitException if the curve admits no honest fit (see the class description)
+   */
+  public static FullCurveResult fit(SettlementCurve curve, double drainagePathMetres) {
+    return fit(curve, drainagePathMetres, FullCurveOptions.defaults());
+  }
+
+  /**
+   * Fits with the given options.
+   *
+   * @param curve one increment's readings
+   * @param drainagePathMetres H<sub>dr</sub>, m; finite and &gt; 0
+   * @param options the options
+   * @return the fit
+   * @throws IllegalArgumentException if the drainage path is not finite and positive, or there are
+   *     too few readings after t = 0 for the parameters
+   * @throws FitException if the curve admits no honest fit (see the class description)
+   */
+  public static FullCurveResult fit(
+      SettlementCurve curve, double drainagePathMetres, FullCurveOptions options) {
+    Checks.requireDrainagePath(drainagePathMetres);
+    if (curve == null || options == null) {
+      throw new IllegalArgumentException("curve and options must not be null");
+    }
+    final int parameterCount = options.fitSecondary() ? 4 : 3;
+    final double[] allTimes = curve.elapsedSeconds();
+    final double[] allSettlements = curve.settlementMetres();
+    final int first = allTimes[0] == 0.0 ? 1 : 0;
+    final int n = allTimes.length - first;
+    if (n < parameterCount + 2) {
+      throw new IllegalArgumentException(
+          Checks.format(
+              "%d readings after t = 0 are too few for the full-curve fit of %d parameters (needs"
+                  + " at least %d)",
+              n, parameterCount, parameterCount + 2));
+    }
+    final double[] t = Arrays.copyOfRange(allTimes, first, allTimes.length);
+    final double[] raw = Arrays.copyOfRange(allSettlements, first, allSettlements.length);
+    double lowest = Arrays.stream(raw).min().orElseThrow();
+    double highest = Arrays.stream(raw).max().orElseThrow();
+    if (!(highest > lowest)) {
+      throw new FitException(
+          "the readings do not move (every settlement is "
+              + raw[0]
+              + " m): there is no consolidation to fit");
+    }
+    final double sign = raw[n - 1] >= raw[0] ? 1.0 : -1.0;
+    final double[] y = new double[n];
+    for (int i = 0; i < n; i++) {
+      y[i] = sign * raw[i];
+    }
+    final double[] w = weights(t, options.weights());
+    final ConsolidationCurveModel model =
+        new ConsolidationCurveModel(drainagePathMetres, options.secondaryOnset());
+    final double pathSquared = drainagePathMetres * drainagePathMetres;
+    final double lastTime = t[n - 1];
+    final double lowestLogCv = Math.log(LOWEST_END_FACTOR * pathSquared / lastTime);
+    final double highestLogCv = Math.log(HIGHEST_END_FACTOR * pathSquared / lastTime);
+
+    // 1. Profile of the residual over trial c_v, linear parameters solved exactly.
+    double[] profileLogCv = new double[PROFILE_POINTS];
+    double[] profileRss = new double[PROFILE_POINTS];
+    double[][] profileLinear = new double[PROFILE_POINTS][];
+    for (int k = 0; k < PROFILE_POINTS; k++) {
+      double endFactor =
+          PROFILE_LOWEST_END_FACTOR
+              * Math.pow(
+                  PROFILE_HIGHEST_END_FACTOR / PROFILE_LOWEST_END_FACTOR,
+                  k / (double) (PROFILE_POINTS - 1));
+      double cv = endFactor * pathSquared / lastTime;
+      profileLogCv[k] = Math.log(cv);
+      profileLinear[k] = linearFit(model, cv, t, y, w, options.fitSecondary());
+      profileRss[k] = profileLinear[k] == null ? Double.NaN : profileLinear[k][3];
+    }
+    // A trial c_v whose best linear fit has no primary settlement cannot start a search for c_v
+    // (the residual does not depend on c_v there): such points are not starts.
+    for (int k = 0; k < PROFILE_POINTS; k++) {
+      if (profileLinear[k] == null || !(profileLinear[k][1] > 0)) {
+        profileRss[k] = Double.NaN;
+      }
+    }
+    List<Integer> startIndices = lowestLocalMinima(profileRss, MAX_STARTS);
+    if (startIndices.isEmpty()) {
+      throw new FitException(
+          "no primary consolidation is seen in these readings: at every trial c_v the best fit"
+              + " has no primary settlement");
+    }
+
+    // 2. Levenberg-Marquardt from each start; keep the best.
+    WeightedLeastSquares solver =
+        WeightedLeastSquares.withDefaults().withMaxIterations(options.maxIterations());
+    WeightedLeastSquares.Model leastSquaresModel =
+        (i, p, gradient) -> {
+          double[] full = new double[4];
+          CurveParameters parameters =
+              new CurveParameters(p[0], p[1], Math.exp(p[2]), parameterCount == 4 ? p[3] : 0.0);
+          double value = model.settlementAndGradient(t[i], parameters, full);
+          System.arraycopy(full, 0, gradient, 0, parameterCount);
+          return value;
+        };
+    WeightedLeastSquares.Solution best = null;
+    List<Double> reachedLogCv = new ArrayList<>();
+    FitException lastFailure = null;
+    for (int index : startIndices) {
+      double[] linear = profileLinear[index];
+      double[] start =
+          parameterCount == 4
+              ? new double[] {linear[0], linear[1], profileLogCv[index], linear[2]}
+              : new double[] {linear[0], linear[1], profileLogCv[index]};
+      try {
+        WeightedLeastSquares.Solution solution =
+            solver.solve(
+                leastSquaresModel,
+                y,
+                w,
+                start,
+                point -> {
+                  point.setEntry(1, Math.max(0.0, point.getEntry(1)));
+                  point.setEntry(
+                      2, Math.min(highestLogCv, Math.max(lowestLogCv, point.getEntry(2))));
+                  if (parameterCount == 4) {
+                    point.setEntry(3, Math.max(0.0, point.getEntry(3)));
+                  }
+                  return point;
+                });
+        reachedLogCv.add(solution.parameters()[2]);
+        if (best == null
+            || solution.weightedResidualSumOfSquares() < best.weightedResidualSumOfSquares()) {
+          best = solution;
+        }
+      } catch (FitException e) {
+        lastFailure = e;
+      }
+    }
+    if (best == null) {
+      throw new FitException(
+          "the least-squares fit failed from every start: " + lastFailure.getMessage(),
+          lastFailure);
+    }
+    final double[] p = best.parameters();
+    final double logCv = p[2];
+    if (logCv <= lowestLogCv + 1e-9) {
+      throw new FitException(
+          Checks.format(
+              "primary consolidation is not seen in these readings: the best fit runs to the"
+                  + " slowest c_v searched (T at the last reading %s)",
+              LOWEST_END_FACTOR));
+    }
+    if (logCv >= highestLogCv - 1e-9) {
+      throw new FitException(
+          "primary consolidation was over before the first reading (the best fit runs to the"
+              + " fastest c_v searched): c_v cannot be found from these readings");
+    }
+    final double cv = Math.exp(logCv);
+    final double secondary = parameterCount == 4 ? p[3] : 0.0;
+    int atBest = 0;
+    for (double reached : reachedLogCv) {
+      if (Math.abs(reached - logCv) < 1e-3) {
+        atBest++;
+      }
+    }
+
+    // 3. Covariance: sandwich with noise variance from unweighted residuals, AR(1) widening.
+    double[] residuals = best.residuals();
+    double sumSquares = 0;
+    double lagProduct = 0;
+    for (int i = 0; i < n; i++) {
+      sumSquares += residuals[i] * residuals[i];
+      if (i > 0) {
+        lagProduct += residuals[i] * residuals[i - 1];
+      }
+    }
+    double noiseVariance = sumSquares / (n - parameterCount);
+    double autocorrelation = sumSquares > 0 ? lagProduct / sumSquares : 0.0;
+    double clipped = Math.min(0.95, Math.max(0.0, autocorrelation));
+    double widening = (1 + clipped) / (1 - clipped);
+    CurveParameters fitted = new CurveParameters(p[0], p[1], cv, secondary);
+    double[][] covariance =
+        covariance(model, fitted, t, w, parameterCount, options.weights(), noiseVariance);
+    double[] errors = new double[4];
+    for (int j = 0; j < parameterCount; j++) {
+      errors[j] = Math.sqrt(Math.max(0.0, covariance[j][j] * widening));
+    }
+    double quantile =
+        new TDistribution(null, n - parameterCount)
+            .inverseCumulativeProbability(0.5 + options.confidenceLevel() / 2);
+    double halfWidth = quantile * errors[2];
+    double cvLow = Math.exp(logCv - halfWidth);
+    double cvHigh = Math.exp(logCv + halfWidth);
+    if (!(cvLow > 0) || !Double.isFinite(cvHigh)) {
+      throw new FitException(
+          "c_v is not determined by these readings (its confidence interval is unbounded)");
+    }
+
+    // 4. Statistics, warnings and the plotted curve.
+    double mean = Arrays.stream(y).average().orElse(0);
+    double total = 0;
+    for (double value : y) {
+      total += (value - mean) * (value - mean);
+    }
+    double rSquared = total > 0 ? 1 - sumSquares / total : 0.0;
+    double endFactor = cv * lastTime / pathSquared;
+    List<FitWarning> warnings = new ArrayList<>();
+    if (sign < 0) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.SWELLING_INCREMENT,
+              "settlement decreases (swelling): the fit used the magnitude; swelling c_v is"
+                  + " usually reported for information only"));
+    }
+    if (p[1] == 0.0) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.PARAMETER_AT_BOUND,
+              "the primary settlement is at its bound 0: no primary consolidation is seen"));
+    }
+    if (parameterCount == 4 && secondary == 0.0) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.PARAMETER_AT_BOUND,
+              "the secondary slope is at its bound 0: no secondary compression is seen"));
+    }
+    if (cvHigh / cvLow > 2) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.WIDE_INTERVAL,
+              Checks.format(
+                  "the %.0f %% interval of c_v spans a factor of %.3g (%.4g to %.4g m^2/s)",
+                  100 * options.confidenceLevel(), cvHigh / cvLow, cvLow, cvHigh)));
+    }
+    double runsZ = runsTestZ(residuals);
+    if (runsZ < RUNS_TEST_CRITICAL_Z) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.RESIDUALS_SHOW_STRUCTURE,
+              Checks.format(
+                  "the residuals change sign too rarely (runs test z = %.2f, lag-1"
+                      + " autocorrelation %.2f): the model misses part of the curve; the interval"
+                      + " was widened by %.2f",
+                  runsZ, autocorrelation, Math.sqrt(widening))));
+    }
+    double lowEndFactor = cvLow * lastTime / pathSquared;
+    if (lowEndFactor < 1) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.PRIMARY_INCOMPLETE,
+              Checks.format(
+                  "T at the last reading is %.3g (%.3g at the lower end of the c_v interval):"
+                      + " primary consolidation may not be complete, and c_v rests on an"
+                      + " unfinished curve",
+                  endFactor, lowEndFactor)));
+    }
+    if (2 * atBest < startIndices.size()) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.STARTS_DISAGREE,
+              Checks.format(
+                  "only %d of %d least-squares starts reached the best fit",
+                  atBest, startIndices.size())));
+    }
+    List<PlotPoint> plotted = new ArrayList<>(CURVE_POINTS);
+    double logFirst = Math.log10(t[0]);
+    double logLast = Math.log10(lastTime);
+    for (int k = 0; k < CURVE_POINTS; k++) {
+      double logTime = logFirst + (logLast - logFirst) * k / (CURVE_POINTS - 1);
+      plotted.add(new PlotPoint(logTime, sign * model.settlement(Math.pow(10, logTime), fitted)));
+    }
+    List<Double> residualList = new ArrayList<>(n);
+    for (double r : residuals) {
+      residualList.add(sign * r);
+    }
+    CurveParameters reported = new CurveParameters(sign * p[0], sign * p[1], cv, sign * secondary);
+    return new FullCurveResult(
+        cv,
+        cvLow,
+        cvHigh,
+        options.confidenceLevel(),
+        reported.initialSettlement(),
+        reported.endOfPrimarySettlement(),
+        reported.secondarySlope(),
+        reported,
+        List.of(errors[0], errors[1], errors[2], errors[3]),
+        residualList,
+        Math.sqrt(sumSquares / n),
+        rSquared,
+        best.iterations(),
+        best.evaluations(),
+        startIndices.size(),
+        atBest,
+        drainagePathMetres,
+        endFactor,
+        plotted,
+        warnings);
+  }
+
+  /**
+   * Weights of the readings: the span of log t each represents (half the distance to its
+   * neighbours), normalised to a mean of 1; or 1 each.
+   */
+  static double[] weights(double[] t, FullCurveOptions.ReadingWeights kind) {
+    int n = t.length;
+    double[] w = new double[n];
+    if (kind == FullCurveOptions.ReadingWeights.UNIT) {
+      Arrays.fill(w, 1.0);
+      return w;
+    }
+    double[] logT = new double[n];
+    for (int i = 0; i < n; i++) {
+      logT[i] = Math.log10(t[i]);
+    }
+    double sum = 0;
+    for (int i = 0; i < n; i++) {
+      double before = i > 0 ? logT[i] - logT[i - 1] : logT[1] - logT[0];
+      double after = i < n - 1 ? logT[i + 1] - logT[i] : logT[n - 1] - logT[n - 2];
+      w[i] = 0.5 * (before + after);
+      sum += w[i];
+    }
+    double mean = sum / n;
+    for (int i = 0; i < n; i++) {
+      // A floor keeps every reading in the fit (and the weights positive).
+      w[i] = Math.max(w[i] / mean, 1e-6);
+    }
+    return w;
+  }
+
+  /**
+   * Weighted least squares of (d_i, d_p, s) for a fixed c_v, under d_p &ge; 0 and s &ge; 0.
+   *
+   * @return {d_i, d_p, s, weighted RSS}
+   */
+  private static double[] linearFit(
+      ConsolidationCurveModel model,
+      double cv,
+      double[] t,
+      double[] y,
+      double[] w,
+      boolean fitSecondary) {
+    int n = t.length;
+    double[][] columns = new double[3][n];
+    double[] gradient = new double[4];
+    CurveParameters unit = new CurveParameters(0, 1, cv, 1);
+    for (int i = 0; i < n; i++) {
+      model.settlementAndGradient(t[i], unit, gradient);
+      columns[0][i] = 1.0;
+      columns[1][i] = gradient[1];
+      columns[2][i] = gradient[3];
+    }
+    double[] best = null;
+    // Subsets of (d_p, s) that are free; d_i is always free. Feasible solutions only.
+    boolean[][] subsets =
+        fitSecondary
+            ? new boolean[][] {{true, true}, {true, false}, {false, true}, {false, false}}
+            : new boolean[][] {{true, false}, {false, false}};
+    for (boolean[] free : subsets) {
+      double[] solution = solveSubset(columns, y, w, free);
+      if (solution == null || solution[1] < 0 || solution[2] < 0) {
+        continue;
+      }
+      if (best == null || solution[3] < best[3]) {
+        best = solution;
+      }
+    }
+    return best;
+  }
+
+  /** Solves the normal equations for d_i and the free ones of (d_p, s); others fixed at 0. */
+  private static double[] solveSubset(double[][] columns, double[] y, double[] w, boolean[] free) {
+    int[] use =
+        free[0] && free[1]
+            ? new int[] {0, 1, 2}
+            : free[0] ? new int[] {0, 1} : free[1] ? new int[] {0, 2} : new int[] {0};
+    int m = use.length;
+    int n = y.length;
+    double[][] a = new double[m][m + 1];
+    for (int r = 0; r < m; r++) {
+      for (int c = 0; c < m; c++) {
+        double sum = 0;
+        for (int i = 0; i < n; i++) {
+          sum += w[i] * columns[use[r]][i] * columns[use[c]][i];
+        }
+        a[r][c] = sum;
+      }
+      double sum = 0;
+      for (int i = 0; i < n; i++) {
+        sum += w[i] * columns[use[r]][i] * y[i];
+      }
+      a[r][m] = sum;
+    }
+    // Gaussian elimination with partial pivoting on the small system.
+    for (int col = 0; col < m; col++) {
+      int pivot = col;
+      for (int r = col + 1; r < m; r++) {
+        if (Math.abs(a[r][col]) > Math.abs(a[pivot][col])) {
+          pivot = r;
+        }
+      }
+      double[] swap = a[col];
+      a[col] = a[pivot];
+      a[pivot] = swap;
+      if (!(Math.abs(a[col][col]) > 1e-300)) {
+        return null;
+      }
+      for (int r = 0; r < m; r++) {
+        if (r != col) {
+          double factor = a[r][col] / a[col][col];
+          for (int c = col; c <= m; c++) {
+            a[r][c] -= factor * a[col][c];
+          }
+        }
+      }
+    }
+    double[] solution = new double[4];
+    for (int r = 0; r < m; r++) {
+      solution[use[r]] = a[r][m] / a[r][r];
+    }
+    double rss = 0;
+    for (int i = 0; i < n; i++) {
+      double fitted = solution[0] + solution[1] * columns[1][i] + solution[2] * columns[2][i];
+      rss += w[i] * (y[i] - fitted) * (y[i] - fitted);
+    }
+    solution[3] = rss;
+    for (double value : solution) {
+      if (!Double.isFinite(value)) {
+        return null;
+      }
+    }
+    return solution;
+  }
+
+  /**
+   * Indices of up to {@code count} lowest local minima of a profile (ends count as minima), keeping
+   * only those within {@link #START_RESIDUAL_FACTOR} of the lowest: the profile is the exact
+   * minimum over the linear parameters at each trial c<sub>v</sub>, so a minimum far above the
+   * lowest cannot lead to the best fit and would only cost iterations.
+   */
+  private static List<Integer> lowestLocalMinima(double[] profile, int count) {
+    List<Integer> minima = new ArrayList<>();
+    for (int k = 0; k < profile.length; k++) {
+      // NaN neighbours (points that are not starts) do not block a minimum.
+      boolean lowerThanLeft = k == 0 || !(profile[k] >= profile[k - 1]);
+      boolean lowerThanRight = k == profile.length - 1 || !(profile[k] > profile[k + 1]);
+      if (lowerThanLeft && lowerThanRight && Double.isFinite(profile[k])) {
+        minima.add(k);
+      }
+    }
+    minima.sort((a, b) -> Double.compare(profile[a], profile[b]));
+    if (!minima.isEmpty()) {
+      double lowest = profile[minima.get(0)];
+      minima.removeIf(k -> profile[k] > START_RESIDUAL_FACTOR * lowest);
+    }
+    return List.copyOf(minima.subList(0, Math.min(count, minima.size())));
+  }
+
+  /** Sandwich (or plain) covariance of the fitted parameters, scaled by the noise variance. */
+  private static double[][] covariance(
+      ConsolidationCurveModel model,
+      CurveParameters fitted,
+      double[] t,
+      double[] w,
+      int p,
+      FullCurveOptions.ReadingWeights kind,
+      double noiseVariance) {
+    double[][] a = new double[p][p];
+    double[][] b = new double[p][p];
+    double[] g = new double[4];
+    for (int i = 0; i < t.length; i++) {
+      model.settlementAndGradient(t[i], fitted, g);
+      for (int j = 0; j < p; j++) {
+        for (int k = 0; k < p; k++) {
+          double product = g[j] * g[k];
+          a[j][k] += w[i] * product;
+          b[j][k] += w[i] * w[i] * product;
+        }
+      }
+    }
+    RealMatrix inverse;
+    try {
+      inverse =
+          new LUDecomposition(new Array2DRowRealMatrix(a, false), 1e-300).getSolver().getInverse();
+    } catch (org.apache.commons.math3.linear.SingularMatrixException e) {
+      throw new FitException(
+          "the parameters cannot all be determined from these readings (singular normal matrix)",
+          e);
+    }
+    RealMatrix result =
+        kind == FullCurveOptions.ReadingWeights.UNIT
+            ? inverse
+            : inverse.multiply(new Array2DRowRealMatrix(b, false)).multiply(inverse);
+    double[][] out = result.scalarMultiply(noiseVariance).getData();
+    return out;
+  }
+
+  /** z statistic of the Wald-Wolfowitz runs test on the residuals' signs (0 if too few). */
+  static double runsTestZ(double[] residuals) {
+    int positives = 0;
+    int negatives = 0;
+    int runs = 0;
+    int previous = 0;
+    for (double r : residuals) {
+      int s = r > 0 ? 1 : r < 0 ? -1 : 0;
+      if (s == 0) {
+        continue;
+      }
+      if (s > 0) {
+        positives++;
+      } else {
+        negatives++;
+      }
+      if (s != previous) {
+        runs++;
+        previous = s;
+      }
+    }
+    int total = positives + negatives;
+    if (positives < 2 || negatives < 2 || total < 10) {
+      return 0.0;
+    }
+    double product = 2.0 * positives * negatives;
+    double mean = product / total + 1;
+    double variance = product * (product - total) / ((double) total * total * (total - 1));
+    return variance > 0 ? (runs - mean) / Math.sqrt(variance) : 0.0;
+  }
+}
