@@ -3,6 +3,8 @@ package org.oedometry.core.compressibility;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.oedometry.core.LoadIncrement;
+import org.oedometry.core.OedometerTest;
 
 /**
  * The compression curve of one oedometer test: the initial state and one point (effective stress,
@@ -16,9 +18,9 @@ import java.util.Locale;
  * is &epsilon;<sub>j</sub> = (e<sub>0</sub> &minus; e<sub>j</sub>) / (1 + e<sub>0</sub>).
  *
  * <p>This type holds plain numbers so that any source can feed it: a whole-test reduction, a
- * spreadsheet, or {@link #fromDeformations} with a specimen's phase relations. Immutable and
- * thread-safe. Results feed engineering decisions: they must be reviewed by a qualified engineer,
- * and local codes and standards govern.
+ * spreadsheet, {@link #fromDeformations} with a specimen's phase relations, or {@link #fromTest}
+ * with a whole {@link OedometerTest}. Immutable and thread-safe. Results feed engineering
+ * decisions: they must be reviewed by a qualified engineer, and local codes and standards govern.
  */
 public final class CompressionCurve {
 
@@ -170,6 +172,42 @@ public final class CompressionCurve {
       list.add(new CompressionPoint(increment.effectiveStress(), voidRatio));
     }
     return new CompressionCurve(phases.initialVoidRatio(), seatingStress, list);
+  }
+
+  /**
+   * The end-of-increment compression curve of a whole test held as values.
+   *
+   * <p>The seating stress is the stress before the first increment; point j has the stress after
+   * increment j and the void ratio at its last reading, e<sub>j</sub> = (H<sub>0</sub> &minus;
+   * &Delta;H<sub>j</sub>) / H<sub>s</sub> &minus; 1, where &Delta;H<sub>j</sub> = H<sub>0</sub>
+   * &minus; {@link OedometerTest#heightAtEndMetres(int)} is the settlement from the start of the
+   * test (the sum of the final readings of increments 0..j) and H<sub>s</sub> = {@link
+   * OedometerTest#heightOfSolidsMetres()} comes from the specimen's dry mass or final water
+   * content. The initial void ratio is H<sub>0</sub> / H<sub>s</sub> &minus; 1. Each increment's
+   * final reading is taken as its end; for end-of-primary points use {@link #fromDeformations} with
+   * each increment's d<sub>100</sub>.
+   *
+   * @param test the test; not null
+   * @return the curve, one point per increment in the order applied
+   * @throws IllegalArgumentException if the test is null, or its first increment unloads (its
+   *     stress after would not exceed the seating stress)
+   */
+  public static CompressionCurve fromTest(OedometerTest test) {
+    Checks.notNull("oedometer test", test);
+    double initialHeight = test.specimen().initialHeightMetres();
+    SpecimenPhases phases = SpecimenPhases.of(initialHeight, test.heightOfSolidsMetres());
+    List<LoadIncrement> increments = test.increments();
+    List<IncrementDeformation> deformations = new ArrayList<>(increments.size());
+    for (int j = 0; j < increments.size(); j++) {
+      deformations.add(
+          IncrementDeformation.of(
+              increments.get(j).stressAfterPascals(), initialHeight - test.heightAtEndMetres(j)));
+    }
+    return fromDeformations(
+        phases,
+        increments.get(0).stressBeforePascals(),
+        deformations,
+        DeformationBasis.END_OF_INCREMENT);
   }
 
   /**

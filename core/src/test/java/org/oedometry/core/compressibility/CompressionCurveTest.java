@@ -7,6 +7,10 @@ import static org.assertj.core.api.Assertions.within;
 import java.util.List;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.oedometry.core.LoadIncrement;
+import org.oedometry.core.OedometerTest;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.core.Specimen;
 
 class CompressionCurveTest {
 
@@ -33,6 +37,67 @@ class CompressionCurveTest {
     assertThat(end.startStress(0)).isZero();
     assertThat(end.startVoidRatio(0)).isCloseTo(1.0, within(1e-15));
     assertThat(end.startStress(1)).isEqualTo(50e3);
+  }
+
+  private static LoadIncrement increment(double beforeKpa, double afterKpa, double finalMetres) {
+    return LoadIncrement.of(
+        beforeKpa * 1e3,
+        afterKpa * 1e3,
+        SettlementCurve.of(
+            new double[] {0, 60, 86_400}, new double[] {0, 0.5 * finalMetres, finalMetres}));
+  }
+
+  @Test
+  @DisplayName(
+      "From a test: end-of-increment e by hand, e = e0 - (1 + e0) dH / H0 with H_s = M_s /"
+          + " (G_s rho_w A) (FACTS: phase relations; invented numbers)")
+  void fromTestUsesEachIncrementsFinalReading() {
+    // Invented specimen: H0 = 20 mm, A = 0.005 m^2, G_s = 2.70, M_s = 0.135 kg, so by hand
+    // H_s = 0.135 / (2.70 * 1000 * 0.005) = 10 mm and e0 = 20 / 10 - 1 = 1.
+    Specimen specimen =
+        Specimen.builder()
+            .initialHeight(0.020)
+            .area(0.005)
+            .specificGravity(2.70)
+            .dryMass(0.135)
+            .build();
+    OedometerTest test =
+        OedometerTest.of(
+            specimen,
+            List.of(
+                increment(10, 20, 0.0002), increment(20, 40, 0.0005), increment(40, 20, -0.0001)));
+    CompressionCurve curve = CompressionCurve.fromTest(test);
+    // Cumulative settlement 0.2, 0.7, 0.6 mm: e = 1 - 2 dH / 20 mm = 0.98, 0.93, 0.94.
+    assertThat(curve.initialVoidRatio()).isCloseTo(1.0, within(1e-12));
+    assertThat(curve.seatingStress()).isEqualTo(10e3);
+    assertThat(curve.size()).isEqualTo(3);
+    assertThat(curve.stress(0)).isEqualTo(20e3);
+    assertThat(curve.stress(1)).isEqualTo(40e3);
+    assertThat(curve.stress(2)).isEqualTo(20e3);
+    assertThat(curve.voidRatio(0)).isCloseTo(0.98, within(1e-12));
+    assertThat(curve.voidRatio(1)).isCloseTo(0.93, within(1e-12));
+    assertThat(curve.voidRatio(2)).isCloseTo(0.94, within(1e-12));
+    assertThat(curve.axialStrain(2)).isCloseTo(0.6 / 20, within(1e-12));
+  }
+
+  @Test
+  @DisplayName("From a test: a first increment that unloads has no curve; null is rejected")
+  void fromTestRejectsAFirstUnloading() {
+    Specimen specimen =
+        Specimen.builder()
+            .initialHeight(0.020)
+            .area(0.005)
+            .specificGravity(2.70)
+            .dryMass(0.135)
+            .build();
+    OedometerTest test = OedometerTest.of(specimen, List.of(increment(20, 10, -0.0001)));
+    assertThatThrownBy(() -> CompressionCurve.fromTest(test))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("effective stress at index 0 (10000.0 Pa)")
+        .hasMessageContaining("seating stress (20000.0 Pa)");
+    assertThatThrownBy(() -> CompressionCurve.fromTest(null))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("oedometer test");
   }
 
   @Test
