@@ -79,6 +79,9 @@ public final class FullCurveMethod {
 
   private static final int MAX_STARTS = 3;
 
+  /** Readings used for the profile of start values, at most. */
+  private static final int PROFILE_READINGS = 300;
+
   /** A profile minimum whose residual exceeds the lowest by more than this is not a start. */
   private static final double START_RESIDUAL_FACTOR = 4.0;
 
@@ -154,7 +157,16 @@ public final class FullCurveMethod {
     final double lowestLogCv = Math.log(LOWEST_END_FACTOR * pathSquared / lastTime);
     final double highestLogCv = Math.log(HIGHEST_END_FACTOR * pathSquared / lastTime);
 
-    // 1. Profile of the residual over trial c_v, linear parameters solved exactly.
+    // 1. Profile of the residual over trial c_v, linear parameters solved exactly, on at most
+    // PROFILE_READINGS readings spread evenly over log t (start values only: the fit uses all).
+    int[] kept = spreadOverLogTime(t, PROFILE_READINGS);
+    double[] profileTimes = new double[kept.length];
+    double[] profileY = new double[kept.length];
+    for (int k = 0; k < kept.length; k++) {
+      profileTimes[k] = t[kept[k]];
+      profileY[k] = y[kept[k]];
+    }
+    double[] profileWeights = kept.length == n ? w : weights(profileTimes, options.weights());
     double[] profileLogCv = new double[PROFILE_POINTS];
     double[] profileRss = new double[PROFILE_POINTS];
     double[][] profileLinear = new double[PROFILE_POINTS][];
@@ -166,7 +178,8 @@ public final class FullCurveMethod {
                   k / (double) (PROFILE_POINTS - 1));
       double cv = endFactor * pathSquared / lastTime;
       profileLogCv[k] = Math.log(cv);
-      profileLinear[k] = linearFit(model, cv, t, y, w, options.fitSecondary());
+      profileLinear[k] =
+          linearFit(model, cv, profileTimes, profileY, profileWeights, options.fitSecondary());
       profileRss[k] = profileLinear[k] == null ? Double.NaN : profileLinear[k][3];
     }
     // A trial c_v whose best linear fit has no primary settlement cannot start a search for c_v
@@ -187,13 +200,14 @@ public final class FullCurveMethod {
     WeightedLeastSquares solver =
         WeightedLeastSquares.withDefaults().withMaxIterations(options.maxIterations());
     WeightedLeastSquares.Model leastSquaresModel =
-        (i, p, gradient) -> {
-          double[] full = new double[4];
+        (p, values, jacobian) -> {
           CurveParameters parameters =
               new CurveParameters(p[0], p[1], Math.exp(p[2]), parameterCount == 4 ? p[3] : 0.0);
-          double value = model.settlementAndGradient(t[i], parameters, full);
-          System.arraycopy(full, 0, gradient, 0, parameterCount);
-          return value;
+          double[] full = new double[4];
+          for (int i = 0; i < values.length; i++) {
+            values[i] = model.settlementAndGradient(t[i], parameters, full);
+            System.arraycopy(full, 0, jacobian[i], 0, parameterCount);
+          }
         };
     WeightedLeastSquares.Solution best = null;
     List<Double> reachedLogCv = new ArrayList<>();
@@ -418,6 +432,36 @@ public final class FullCurveMethod {
       w[i] = Math.max(w[i] / mean, 1e-6);
     }
     return w;
+  }
+
+  /**
+   * Indices of at most about {@code limit} readings spread evenly over log t: the first reading of
+   * each of {@code limit} equal bins of log t (all readings when there are no more than the limit).
+   */
+  static int[] spreadOverLogTime(double[] t, int limit) {
+    int n = t.length;
+    if (n <= limit) {
+      int[] all = new int[n];
+      for (int i = 0; i < n; i++) {
+        all[i] = i;
+      }
+      return all;
+    }
+    double low = Math.log10(t[0]);
+    double span = Math.log10(t[n - 1]) - low;
+    int[] kept = new int[limit + 1];
+    int count = 0;
+    int lastBin = -1;
+    for (int i = 0; i < n; i++) {
+      int bin = (int) Math.min(limit - 1, Math.floor((Math.log10(t[i]) - low) / span * limit));
+      if (bin != lastBin || i == n - 1) {
+        if (count < kept.length) {
+          kept[count++] = i;
+        }
+        lastBin = bin;
+      }
+    }
+    return Arrays.copyOf(kept, count);
   }
 
   /**

@@ -57,7 +57,8 @@ public record FullCurveResult(
     double drainagePath,
     double timeFactorAtLastReading,
     List<PlotPoint> fittedCurve,
-    List<FitWarning> warnings) {
+    List<FitWarning> warnings)
+    implements CvEstimate {
 
   /**
    * Validates the result and copies the lists.
@@ -106,6 +107,16 @@ public record FullCurveResult(
     residuals = List.copyOf(residuals);
     fittedCurve = List.copyOf(fittedCurve);
     warnings = List.copyOf(warnings);
+  }
+
+  /**
+   * The method: {@link CvMethod#FULL_CURVE}.
+   *
+   * @return {@link CvMethod#FULL_CURVE}
+   */
+  @Override
+  public CvMethod method() {
+    return CvMethod.FULL_CURVE;
   }
 
   /**

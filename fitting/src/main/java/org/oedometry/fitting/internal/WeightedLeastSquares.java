@@ -40,9 +40,25 @@ import org.oedometry.fitting.FitException;
  */
 public final class WeightedLeastSquares {
 
-  /** One observation's model value and gradient. */
+  /** The model: its values at every observation and its Jacobian, for one parameter vector. */
   @FunctionalInterface
   public interface Model {
+    /**
+     * Model values f<sub>i</sub>(p) and Jacobian &part;f<sub>i</sub>/&part;p<sub>j</sub> for all
+     * observations at once (so that work shared by all observations is done once a pass).
+     *
+     * @param parameters current parameters (do not modify)
+     * @param values receives f<sub>i</sub>(p), length n
+     * @param jacobian receives row i = gradient of f<sub>i</sub>, n x p
+     */
+    void evaluate(double[] parameters, double[] values, double[][] jacobian);
+  }
+
+  /**
+   * A model given one observation at a time, for models with nothing to share between observations.
+   */
+  @FunctionalInterface
+  public interface PointModel {
     /**
      * Model value f<sub>i</sub>(p) and its gradient &part;f<sub>i</sub>/&part;p.
      *
@@ -52,6 +68,19 @@ public final class WeightedLeastSquares {
      * @return f<sub>i</sub>(p)
      */
     double valueAndGradient(int index, double[] parameters, double[] gradient);
+
+    /**
+     * This model as a {@link Model}.
+     *
+     * @return a model that calls this one for each observation
+     */
+    default Model asModel() {
+      return (parameters, values, jacobian) -> {
+        for (int i = 0; i < values.length; i++) {
+          values[i] = valueAndGradient(i, parameters, jacobian[i]);
+        }
+      };
+    }
   }
 
   /**
@@ -251,8 +280,9 @@ public final class WeightedLeastSquares {
           double[] parameters = point.toArray();
           double[] values = new double[n];
           double[][] jacobian = new double[n][p];
+          model.evaluate(parameters, values, jacobian);
           for (int i = 0; i < n; i++) {
-            double value = model.valueAndGradient(i, parameters, jacobian[i]);
+            double value = values[i];
             if (!Double.isFinite(value)) {
               throw new NonFiniteModelException(i, value, parameters);
             }
@@ -307,10 +337,10 @@ public final class WeightedLeastSquares {
       }
     }
     double[] residuals = new double[n];
-    double[] gradient = new double[p];
+    model.evaluate(parameters, residuals, new double[n][p]);
     double chiSquare = 0;
     for (int i = 0; i < n; i++) {
-      residuals[i] = observed[i] - model.valueAndGradient(i, parameters, gradient);
+      residuals[i] = observed[i] - residuals[i];
       chiSquare += weights[i] * residuals[i] * residuals[i];
     }
     double variance = chiSquare / (n - p);

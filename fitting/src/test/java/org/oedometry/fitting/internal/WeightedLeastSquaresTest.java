@@ -94,6 +94,10 @@ class WeightedLeastSquaresTest {
 
   /** The NIST models with their analytic gradients (from the model formulas in each file). */
   static WeightedLeastSquares.Model model(Dataset d) {
+    return pointModel(d).asModel();
+  }
+
+  static WeightedLeastSquares.PointModel pointModel(Dataset d) {
     double[] x = d.x();
     return switch (d.name()) {
       case "Misra1a", "BoxBOD" ->
@@ -254,11 +258,13 @@ class WeightedLeastSquaresTest {
   void rejectsBadInput() {
     WeightedLeastSquares solver = WeightedLeastSquares.withDefaults();
     WeightedLeastSquares.Model line =
-        (i, b, g) -> {
-          g[0] = 1;
-          g[1] = i;
-          return b[0] + b[1] * i;
-        };
+        ((WeightedLeastSquares.PointModel)
+                (i, b, g) -> {
+                  g[0] = 1;
+                  g[1] = i;
+                  return b[0] + b[1] * i;
+                })
+            .asModel();
     double[] start = {0, 0};
     assertThatThrownBy(
             () -> solver.solve(line, new double[] {1, 2}, new double[] {1, 1}, start, null))
@@ -298,11 +304,13 @@ class WeightedLeastSquaresTest {
     WeightedLeastSquares.Solution s =
         WeightedLeastSquares.withDefaults()
             .solve(
-                (i, b, g) -> {
-                  g[0] = 1;
-                  g[1] = x[i];
-                  return b[0] + b[1] * x[i];
-                },
+                ((WeightedLeastSquares.PointModel)
+                        (i, b, g) -> {
+                          g[0] = 1;
+                          g[1] = x[i];
+                          return b[0] + b[1] * x[i];
+                        })
+                    .asModel(),
                 y,
                 w,
                 new double[] {0, 0},
