@@ -9,7 +9,7 @@ public enum CvMethod {
   LOG_TIME("log-time (Casagrande)", "Casagrande & Fadum (1940)"),
   /** Root-time construction, Taylor (1942, 1948): t90 from the 1.15 line on the root of t. */
   ROOT_TIME("root-time (Taylor)", "Taylor (1942, 1948)"),
-  /** Least-squares fit of the whole curve with secondary compression (Barros & Pinto 2008). */
+  /** Least-squares fit of the whole curve with secondary compression (Barros &amp; Pinto 2008). */
   FULL_CURVE("full-curve least squares", "after Barros & Pinto (2008)"),
   /** Inflection point on the log-time curve, Cour (1971); Mesri, Feng &amp; Shahien (1999). */
   INFLECTION_POINT("inflection point", "Cour (1971); Mesri, Feng & Shahien (1999)"),

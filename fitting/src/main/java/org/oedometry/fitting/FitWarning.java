@@ -44,7 +44,25 @@ public record FitWarning(Kind kind, String message) {
      */
     PRIMARY_INCOMPLETE,
     /** Fewer than half the least-squares starts reached the best fit. */
-    STARTS_DISAGREE
+    STARTS_DISAGREE,
+    /**
+     * The iterative choice of readings of a further method (the 60-90 % range of the rectangular
+     * hyperbola, the early part of the early-slope method, the window of Asaoka's method, the
+     * window of the inflection point) did not settle to one set; the last set was used.
+     */
+    READING_CHOICE_NOT_SETTLED,
+    /** The straight line of a further method rests on fewer than 4 readings. */
+    FEW_READINGS_IN_RANGE,
+    /**
+     * The readings end before the part of the curve the method rests on is complete (for example
+     * before 90 % consolidation): primary consolidation may not be complete.
+     */
+    READINGS_END_BEFORE_RANGE,
+    /**
+     * The readings are not equally spaced in time and were resampled at equal steps by a
+     * shape-preserving interpolation (Asaoka's method).
+     */
+    READINGS_RESAMPLED
   }
 
   /**

@@ -1,0 +1,107 @@
+package org.oedometry.fitting;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.internal.Checks;
+
+/**
+ * The timed readings (t &gt; 0) of one increment, turned to the direction of movement, as the
+ * further c<sub>v</sub> methods use them: settlement counted from the start of the increment (the
+ * convention of {@link SettlementCurve}), times the sign of the movement so that a swelling
+ * increment is treated by its magnitude. Records the warnings that preparation raises.
+ */
+final class IncrementReadings {
+
+  /** Elapsed times, s, all &gt; 0, increasing. */
+  final double[] times;
+
+  /** Settlements times {@link #sign}, m: increasing on the whole. */
+  final double[] movement;
+
+  /** +1 for compression, -1 for swelling. */
+  final double sign;
+
+  /** Warnings raised while preparing (zero reading left out, swelling). */
+  final List<FitWarning> warnings;
+
+  private IncrementReadings(
+      double[] times, double[] movement, double sign, List<FitWarning> warnings) {
+    this.times = times;
+    this.movement = movement;
+    this.sign = sign;
+    this.warnings = warnings;
+  }
+
+  /**
+   * Prepares the readings.
+   *
+   * @param curve the curve; not null
+   * @param drainagePathMetres checked to be finite and &gt; 0
+   * @param minimum readings after t = 0 the method needs
+   * @param method the method's name for messages
+   * @throws IllegalArgumentException if the curve is null, the drainage path is invalid or there
+   *     are too few readings
+   * @throws FitException if the readings do not move
+   */
+  static IncrementReadings of(
+      SettlementCurve curve, double drainagePathMetres, int minimum, String method) {
+    Checks.requireDrainagePath(drainagePathMetres);
+    if (curve == null) {
+      throw new IllegalArgumentException("curve must not be null");
+    }
+    double[] allTimes = curve.elapsedSeconds();
+    double[] allSettlements = curve.settlementMetres();
+    int first = curve.firstTimedIndex();
+    int n = allTimes.length - first;
+    if (n < minimum) {
+      throw new IllegalArgumentException(
+          Checks.format(
+              "%d readings after t = 0 are too few for the %s method (needs at least %d)",
+              n, method, minimum));
+    }
+    double[] t = Arrays.copyOfRange(allTimes, first, allTimes.length);
+    double[] d = Arrays.copyOfRange(allSettlements, first, allSettlements.length);
+    double lowest = Arrays.stream(d).min().orElseThrow();
+    double highest = Arrays.stream(d).max().orElseThrow();
+    if (!(highest > lowest)) {
+      throw new FitException(
+          "the readings do not move (every settlement is "
+              + d[0]
+              + " m): there is no consolidation to analyse");
+    }
+    List<FitWarning> warnings = new ArrayList<>();
+    if (first == 1) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.ZERO_READING_IGNORED,
+              Checks.format(
+                  "the reading at t = 0 (%s m) was left out; settlement is counted from the start"
+                      + " of the increment",
+                  allSettlements[0])));
+    }
+    double sign = d[n - 1] >= d[0] ? 1.0 : -1.0;
+    if (sign < 0) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.SWELLING_INCREMENT,
+              "settlement decreases (swelling): the method used the magnitude of the movement;"
+                  + " swelling c_v is usually reported for information only"));
+      for (int i = 0; i < n; i++) {
+        d[i] = -d[i];
+      }
+    }
+    return new IncrementReadings(t, d, sign, warnings);
+  }
+
+  /** Number of readings. */
+  int size() {
+    return times.length;
+  }
+
+  /** Elapsed time of the last reading, s. */
+  double lastTime() {
+    return times[times.length - 1];
+  }
+}

@@ -1,0 +1,123 @@
+package org.oedometry.fitting;
+
+import java.util.List;
+import org.oedometry.fitting.internal.Checks;
+
+/**
+ * Result of {@link InflectionPointMethod}: c<sub>v</sub> from the time of the inflection of the
+ * log-time curve, the inflection itself, the d<sub>0</sub> and d<sub>100</sub> its tangent implies,
+ * and the geometry to draw it. Plot coordinates: x = log<sub>10</sub>(t / 1 s), y = settlement in
+ * m. Settlements are in the sign of the input (negative for a swelling increment). All values are
+ * finite.
+ *
+ * <p>Results feed engineering decisions and must be reviewed by a qualified engineer; local codes
+ * and standards govern.
+ *
+ * @param cv c<sub>v</sub> = T<sub>I</sub> H<sub>dr</sub><sup>2</sup> / t<sub>I</sub>,
+ *     m<sup>2</sup>/s
+ * @param inflectionTime t<sub>I</sub>, the time of the steepest slope on log t, s
+ * @param inflectionSettlement settlement of the local fit at t<sub>I</sub>, m
+ * @param slopePerLogCycle slope of the curve at the inflection, m per log<sub>10</sub> cycle of
+ *     time
+ * @param d0 start of primary consolidation implied by the slope, d<sub>I</sub> - U<sub>I</sub>
+ *     (d<sub>100</sub> - d<sub>0</sub>), m
+ * @param d100 end of primary consolidation implied by the slope, d<sub>0</sub> + slope / 0.686845,
+ *     m
+ * @param windowHalfWidth half-width of the final local window, log<sub>10</sub> cycles
+ * @param inflectionPoint the inflection in plot coordinates
+ * @param tangentLine the tangent at the inflection, from its crossing of d<sub>0</sub> to its
+ *     crossing of d<sub>100</sub> (two points)
+ * @param readingsUsed the readings of the final local window, in plot coordinates
+ * @param drainagePath H<sub>dr</sub> used, m
+ * @param warnings doubts about the result; empty when there are none
+ */
+public record InflectionPointResult(
+    double cv,
+    double inflectionTime,
+    double inflectionSettlement,
+    double slopePerLogCycle,
+    double d0,
+    double d100,
+    double windowHalfWidth,
+    PlotPoint inflectionPoint,
+    List<PlotPoint> tangentLine,
+    List<PlotPoint> readingsUsed,
+    double drainagePath,
+    List<FitWarning> warnings)
+    implements CvEstimate {
+
+  /**
+   * Validates the result and copies the lists.
+   *
+   * @param cv c<sub>v</sub>, m<sup>2</sup>/s, finite and &gt; 0
+   * @param inflectionTime t<sub>I</sub>, s, finite and &gt; 0
+   * @param inflectionSettlement d<sub>I</sub>, m, finite
+   * @param slopePerLogCycle m per log<sub>10</sub> cycle, finite
+   * @param d0 m, finite
+   * @param d100 m, finite
+   * @param windowHalfWidth log<sub>10</sub> cycles, finite
+   * @param inflectionPoint not null
+   * @param tangentLine two points
+   * @param readingsUsed the readings of the window
+   * @param drainagePath H<sub>dr</sub>, m, finite and &gt; 0
+   * @param warnings the warnings
+   * @throws IllegalArgumentException if a value is not finite or out of range
+   * @throws NullPointerException if a list or the point is null
+   */
+  public InflectionPointResult {
+    Results.requirePositive("cv", cv, "m^2/s");
+    Results.requirePositive("inflection time", inflectionTime, "s");
+    Checks.requireFinite("inflection settlement", inflectionSettlement, "m");
+    Checks.requireFinite("slope per log cycle", slopePerLogCycle, "m");
+    Checks.requireFinite("d0", d0, "m");
+    Checks.requireFinite("d100", d100, "m");
+    Checks.requireFinite("window half-width", windowHalfWidth, "log10 cycles");
+    Checks.requireDrainagePath(drainagePath);
+    java.util.Objects.requireNonNull(inflectionPoint, "inflectionPoint");
+    tangentLine = List.copyOf(tangentLine);
+    readingsUsed = List.copyOf(readingsUsed);
+    warnings = List.copyOf(warnings);
+  }
+
+  /**
+   * The method: {@link CvMethod#INFLECTION_POINT}.
+   *
+   * @return {@link CvMethod#INFLECTION_POINT}
+   */
+  @Override
+  public CvMethod method() {
+    return CvMethod.INFLECTION_POINT;
+  }
+
+  /**
+   * Whether a warning of the given kind was raised.
+   *
+   * @param kind a kind
+   * @return true if {@link #warnings()} holds one of that kind
+   */
+  public boolean hasWarning(FitWarning.Kind kind) {
+    return warnings.stream().anyMatch(w -> w.is(kind));
+  }
+
+  /**
+   * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year), t<sub>I</sub> in min,
+   * settlements in mm and the warnings' kinds.
+   *
+   * @return the summary
+   */
+  @Override
+  public String toString() {
+    return Checks.format(
+        "InflectionPointResult[cv %.4g m^2/yr, t_I %.4g min, d_I %.4f mm, slope %.4f mm/log cycle,"
+            + " d0 %.4f mm, d100 %.4f mm, %d readings in window, H_dr %.4g mm, warnings %s]",
+        cv * Results.JULIAN_YEAR_SECONDS,
+        inflectionTime / 60,
+        inflectionSettlement * 1e3,
+        slopePerLogCycle * 1e3,
+        d0 * 1e3,
+        d100 * 1e3,
+        readingsUsed.size(),
+        drainagePath * 1e3,
+        warnings.stream().map(FitWarning::kind).toList());
+  }
+}

@@ -1,0 +1,113 @@
+package org.oedometry.fitting;
+
+import java.util.List;
+import org.oedometry.fitting.internal.Checks;
+
+/**
+ * Result of {@link RectangularHyperbolaMethod}: c<sub>v</sub> from the line t/&delta; = m t + c
+ * over 60-90 % consolidation, the line, t<sub>60</sub> and t<sub>90</sub>, d<sub>100</sub> and the
+ * geometry to draw it. Plot coordinates: x = t in s, y = t/&delta; in s/m (&delta; the magnitude of
+ * the settlement). d<sub>100</sub> is in the sign of the input. All values are finite.
+ *
+ * <p>Results feed engineering decisions and must be reviewed by a qualified engineer; local codes
+ * and standards govern.
+ *
+ * @param cv c<sub>v</sub> = (C/M) H<sub>dr</sub><sup>2</sup> m / c, m<sup>2</sup>/s
+ * @param slope m, slope of t/&delta; against t, 1/m
+ * @param intercept c, intercept of t/&delta; at t = 0, s/m
+ * @param t60 time of 60 % consolidation on the fitted line, s
+ * @param t90 time of 90 % consolidation on the fitted line, s
+ * @param d100 end of primary consolidation, M/m, counted from the start of the increment, m
+ * @param readingsUsed the readings on the line, in plot coordinates
+ * @param fittedLine the line from t<sub>60</sub> to t<sub>90</sub> (two points)
+ * @param iterations choices of readings made until the set settled
+ * @param drainagePath H<sub>dr</sub> used, m
+ * @param warnings doubts about the result; empty when there are none
+ */
+public record RectangularHyperbolaResult(
+    double cv,
+    double slope,
+    double intercept,
+    double t60,
+    double t90,
+    double d100,
+    List<PlotPoint> readingsUsed,
+    List<PlotPoint> fittedLine,
+    int iterations,
+    double drainagePath,
+    List<FitWarning> warnings)
+    implements CvEstimate {
+
+  /**
+   * Validates the result and copies the lists.
+   *
+   * @param cv m<sup>2</sup>/s, finite and &gt; 0
+   * @param slope 1/m, finite and &gt; 0
+   * @param intercept s/m, finite and &gt; 0
+   * @param t60 s, finite and &gt; 0
+   * @param t90 s, finite and &gt; 0
+   * @param d100 m, finite
+   * @param readingsUsed the readings on the line
+   * @param fittedLine two points
+   * @param iterations &ge; 1
+   * @param drainagePath H<sub>dr</sub>, m, finite and &gt; 0
+   * @param warnings the warnings
+   * @throws IllegalArgumentException if a value is not finite or out of range
+   * @throws NullPointerException if a list is null
+   */
+  public RectangularHyperbolaResult {
+    Results.requirePositive("cv", cv, "m^2/s");
+    Results.requirePositive("slope of t/d", slope, "1/m");
+    Results.requirePositive("intercept of t/d", intercept, "s/m");
+    Results.requirePositive("t60", t60, "s");
+    Results.requirePositive("t90", t90, "s");
+    Checks.requireFinite("d100", d100, "m");
+    if (iterations < 1) {
+      throw new IllegalArgumentException(Checks.format("iterations (%d) must be >= 1", iterations));
+    }
+    Checks.requireDrainagePath(drainagePath);
+    readingsUsed = List.copyOf(readingsUsed);
+    fittedLine = List.copyOf(fittedLine);
+    warnings = List.copyOf(warnings);
+  }
+
+  /**
+   * The method: {@link CvMethod#RECTANGULAR_HYPERBOLA}.
+   *
+   * @return {@link CvMethod#RECTANGULAR_HYPERBOLA}
+   */
+  @Override
+  public CvMethod method() {
+    return CvMethod.RECTANGULAR_HYPERBOLA;
+  }
+
+  /**
+   * Whether a warning of the given kind was raised.
+   *
+   * @param kind a kind
+   * @return true if {@link #warnings()} holds one of that kind
+   */
+  public boolean hasWarning(FitWarning.Kind kind) {
+    return warnings.stream().anyMatch(w -> w.is(kind));
+  }
+
+  /**
+   * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year), times in min,
+   * d<sub>100</sub> in mm and the warnings' kinds.
+   *
+   * @return the summary
+   */
+  @Override
+  public String toString() {
+    return Checks.format(
+        "RectangularHyperbolaResult[cv %.4g m^2/yr, t60 %.4g min, t90 %.4g min, d100 %.4f mm,"
+            + " %d readings on the line, H_dr %.4g mm, warnings %s]",
+        cv * Results.JULIAN_YEAR_SECONDS,
+        t60 / 60,
+        t90 / 60,
+        d100 * 1e3,
+        readingsUsed.size(),
+        drainagePath * 1e3,
+        warnings.stream().map(FitWarning::kind).toList());
+  }
+}

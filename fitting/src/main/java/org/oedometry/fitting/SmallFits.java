@@ -1,0 +1,195 @@
+package org.oedometry.fitting;
+
+/**
+ * Small least-squares fits and a shape-preserving interpolation shared by the further methods. Pure
+ * functions; they return null (never NaN) where the system is singular.
+ */
+final class SmallFits {
+
+  private SmallFits() {}
+
+  /**
+   * Least-squares polynomial y = a<sub>0</sub> + a<sub>1</sub> u + ... + a<sub>k</sub> u<sup>k
+   * </sup> through the points, by the normal equations on u / scale (scale = the largest |u|, which
+   * keeps the system well conditioned for the low degrees used here), solved by Gaussian
+   * elimination with partial pivoting.
+   *
+   * @return the coefficients in u (not in u / scale), or null if singular or not finite
+   */
+  static double[] polynomial(double[] u, double[] y, int degree) {
+    int m = degree + 1;
+    if (u.length < m) {
+      return null;
+    }
+    double scale = 0;
+    for (double value : u) {
+      scale = Math.max(scale, Math.abs(value));
+    }
+    if (!(scale > 0)) {
+      scale = 1;
+    }
+    double[][] a = new double[m][m + 1];
+    double[] powers = new double[2 * m - 1];
+    for (int i = 0; i < u.length; i++) {
+      double v = u[i] / scale;
+      double p = 1;
+      for (int k = 0; k < powers.length; k++) {
+        powers[k] = p;
+        p *= v;
+      }
+      for (int r = 0; r < m; r++) {
+        for (int c = 0; c < m; c++) {
+          a[r][c] += powers[r + c];
+        }
+        a[r][m] += powers[r] * y[i];
+      }
+    }
+    double[] solution = solve(a);
+    if (solution == null) {
+      return null;
+    }
+    double factor = 1;
+    for (int k = 0; k < m; k++) {
+      solution[k] /= factor;
+      factor *= scale;
+      if (!Double.isFinite(solution[k])) {
+        return null;
+      }
+    }
+    return solution;
+  }
+
+  /** Solves the augmented system in place; null if singular. */
+  private static double[] solve(double[][] a) {
+    int m = a.length;
+    for (int col = 0; col < m; col++) {
+      int pivot = col;
+      for (int r = col + 1; r < m; r++) {
+        if (Math.abs(a[r][col]) > Math.abs(a[pivot][col])) {
+          pivot = r;
+        }
+      }
+      double[] swap = a[col];
+      a[col] = a[pivot];
+      a[pivot] = swap;
+      if (!(Math.abs(a[col][col]) > 1e-300)) {
+        return null;
+      }
+      for (int r = 0; r < m; r++) {
+        if (r != col) {
+          double factor = a[r][col] / a[col][col];
+          for (int c = col; c <= m; c++) {
+            a[r][c] -= factor * a[col][c];
+          }
+        }
+      }
+    }
+    double[] x = new double[m];
+    for (int r = 0; r < m; r++) {
+      x[r] = a[r][m] / a[r][r];
+    }
+    return x;
+  }
+
+  /**
+   * Straight line y = intercept + slope x by ordinary least squares (centred sums).
+   *
+   * @return {intercept, slope}, or null if the x values do not vary or a result is not finite
+   */
+  static double[] line(double[] x, double[] y) {
+    int n = x.length;
+    if (n < 2) {
+      return null;
+    }
+    double meanX = 0;
+    double meanY = 0;
+    for (int i = 0; i < n; i++) {
+      meanX += x[i];
+      meanY += y[i];
+    }
+    meanX /= n;
+    meanY /= n;
+    double sxx = 0;
+    double sxy = 0;
+    for (int i = 0; i < n; i++) {
+      sxx += (x[i] - meanX) * (x[i] - meanX);
+      sxy += (x[i] - meanX) * (y[i] - meanY);
+    }
+    if (!(sxx > 0)) {
+      return null;
+    }
+    double slope = sxy / sxx;
+    double intercept = meanY - slope * meanX;
+    if (!Double.isFinite(slope) || !Double.isFinite(intercept)) {
+      return null;
+    }
+    return new double[] {intercept, slope};
+  }
+
+  /**
+   * Monotone piecewise cubic Hermite interpolation (Fritsch &amp; Carlson 1980, SIAM J. Numer.
+   * Anal. 17(2)), with the weighted harmonic mean of the neighbouring secants at interior knots and
+   * the one-sided three-point shape-preserving formula at the ends: between two knots the
+   * interpolant stays within the two values, and it is monotone wherever the data are.
+   *
+   * @param x knots, strictly increasing (at least 2)
+   * @param y values at the knots
+   * @param at where to evaluate, within [x<sub>0</sub>, x<sub>n-1</sub>] (clamped)
+   * @return the interpolated values
+   */
+  static double[] monotoneCubic(double[] x, double[] y, double[] at) {
+    int n = x.length;
+    double[] h = new double[n - 1];
+    double[] secant = new double[n - 1];
+    for (int k = 0; k < n - 1; k++) {
+      h[k] = x[k + 1] - x[k];
+      secant[k] = (y[k + 1] - y[k]) / h[k];
+    }
+    double[] slope = new double[n];
+    if (n == 2) {
+      slope[0] = secant[0];
+      slope[1] = secant[0];
+    } else {
+      for (int k = 1; k < n - 1; k++) {
+        if (secant[k - 1] * secant[k] > 0) {
+          double w1 = 2 * h[k] + h[k - 1];
+          double w2 = h[k] + 2 * h[k - 1];
+          slope[k] = (w1 + w2) / (w1 / secant[k - 1] + w2 / secant[k]);
+        }
+      }
+      slope[0] = endSlope(h[0], h[1], secant[0], secant[1]);
+      slope[n - 1] = endSlope(h[n - 2], h[n - 3], secant[n - 2], secant[n - 3]);
+    }
+    double[] out = new double[at.length];
+    for (int j = 0; j < at.length; j++) {
+      double v = Math.min(x[n - 1], Math.max(x[0], at[j]));
+      int k = java.util.Arrays.binarySearch(x, v);
+      if (k >= 0) {
+        out[j] = y[k];
+        continue;
+      }
+      k = Math.min(n - 2, -k - 2);
+      double s = (v - x[k]) / h[k];
+      double s2 = s * s;
+      double s3 = s2 * s;
+      out[j] =
+          (2 * s3 - 3 * s2 + 1) * y[k]
+              + (s3 - 2 * s2 + s) * h[k] * slope[k]
+              + (-2 * s3 + 3 * s2) * y[k + 1]
+              + (s3 - s2) * h[k] * slope[k + 1];
+    }
+    return out;
+  }
+
+  /** Shape-preserving three-point end slope (as in Moler's pchip). */
+  private static double endSlope(double h0, double h1, double del0, double del1) {
+    double d = ((2 * h0 + h1) * del0 - h0 * del1) / (h0 + h1);
+    if (Math.signum(d) != Math.signum(del0)) {
+      return 0;
+    }
+    if (Math.signum(del0) != Math.signum(del1) && Math.abs(d) > Math.abs(3 * del0)) {
+      return 3 * del0;
+    }
+    return d;
+  }
+}

@@ -1,0 +1,144 @@
+package org.oedometry.fitting;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.theory.CurveParameters;
+import org.oedometry.theory.Terzaghi;
+
+class AsaokaMethodTest {
+
+  static final double H = ExactCurves.DRAINAGE_PATH;
+
+  @Test
+  @DisplayName(
+      "Second formula: the one-term series 1 - U = (8/pi^2) exp(-pi^2 T/4) (FACTS.md) is within"
+          + " 0.04 % of Terzaghi's 1 - U from 60 % on, so b1 = exp(-pi^2 dT/4) there")
+  void oneTermSolutionHoldsInTheWindow() {
+    double start = Terzaghi.timeFactor(AsaokaMethod.WINDOW_START_DEGREE);
+    for (double t = start; t < 2; t += 0.05) {
+      double oneTerm = 8 / (Math.PI * Math.PI) * Math.exp(-Math.PI * Math.PI * t / 4);
+      assertThat(oneTerm / Terzaghi.remainingFraction(t) - 1).isCloseTo(0, within(4e-4));
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Exact dense log-spaced curves (our forward model, mpmath-checked), resampled: c_v within"
+          + " 0.3 %, final settlement within 0.1 % of d_i + d_p")
+  void exactLogSpaced() {
+    for (double cvPerYear : new double[] {0.3, 2, 10, 60}) {
+      double cv = cvPerYear / ExactCurves.YEAR;
+      AsaokaResult r = AsaokaMethod.fit(ExactCurves.dense(cv, 0.02e-3), H);
+      assertThat(r.cv() / cv - 1).as("%s m^2/yr", cvPerYear).isCloseTo(0, within(3e-3));
+      assertThat(r.finalSettlement()).isCloseTo(0.52e-3, within(1e-3 * 0.52e-3));
+      assertThat(r.resampled()).isTrue();
+      assertThat(r.hasWarning(FitWarning.Kind.READINGS_RESAMPLED)).isTrue();
+      assertThat(r.windowStart() * cv / (H * H))
+          .isCloseTo(Terzaghi.timeFactor(AsaokaMethod.WINDOW_START_DEGREE), within(3e-3));
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Exact equally spaced data-logger readings (10 s for 24 h) are used as they are: c_v within"
+          + " 0.3 %")
+  void exactEquallySpaced() {
+    double cv = 2 / ExactCurves.YEAR;
+    SettlementCurve c =
+        ExactCurves.curve(
+            ExactCurves.equalTimes(10, 8640), CurveParameters.of(0.01e-3, 0.5e-3, cv, 0));
+    AsaokaResult r = AsaokaMethod.fit(c, H);
+    assertThat(r.cv() / cv - 1).isCloseTo(0, within(3e-3));
+    assertThat(r.resampled()).isFalse();
+    assertThat(r.warnings()).isEmpty();
+    assertThat(r.timeStep() % 10).isCloseTo(0, within(1e-9));
+  }
+
+  @Test
+  @DisplayName("An instantaneous compression changes b0 only: c_v the same")
+  void offsetDoesNotMatter() {
+    double cv = 2 / ExactCurves.YEAR;
+    double a = AsaokaMethod.fit(ExactCurves.dense(cv, 0), H).cv();
+    double b = AsaokaMethod.fit(ExactCurves.dense(cv, 0.05e-3), H).cv();
+    assertThat(b).isCloseTo(a, within(1e-6 * a));
+  }
+
+  @Test
+  @DisplayName("Geometry: the fitted line ends on the 45-degree line at the final settlement")
+  void geometry() {
+    AsaokaResult r = AsaokaMethod.fit(ExactCurves.dense(2 / ExactCurves.YEAR, 0), H);
+    PlotPoint end = r.fittedLine().get(1);
+    assertThat(end.x()).isEqualTo(end.y()).isEqualTo(r.finalSettlement());
+    assertThat(r.b0() + r.b1() * r.finalSettlement()).isCloseTo(r.finalSettlement(), within(1e-15));
+    assertThat(r.asaokaPoints()).hasSize(r.sampledSettlements().size() - 1);
+    assertThat(r.sampledSettlements()).hasSize(AsaokaOptions.defaults().steps() + 1);
+    assertThat(r.method()).isEqualTo(CvMethod.ASAOKA);
+    assertThat(r.toString()).startsWith("AsaokaResult[cv 2.00");
+  }
+
+  @Test
+  @DisplayName("Incomplete curves (ending at U = 25 %, 59 %, 76 %): FitException")
+  void incompleteCurve() {
+    double cv = 2 / ExactCurves.YEAR;
+    for (double lastT : new double[] {0.05, 0.3, 0.5}) {
+      SettlementCurve c =
+          ExactCurves.curve(
+              ExactCurves.logTimes(cv, 1e-3, lastT, 80), CurveParameters.of(0, 0.5e-3, cv, 0));
+      assertThatThrownBy(() -> AsaokaMethod.fit(c, H))
+          .as("ending at T = %s", lastT)
+          .isInstanceOf(FitException.class);
+    }
+  }
+
+  @Test
+  @DisplayName("Curve ending at U = 85 %: c_v found, readings-end warning")
+  void endsBeforeNinety() {
+    double cv = 2 / ExactCurves.YEAR;
+    SettlementCurve c =
+        ExactCurves.curve(
+            ExactCurves.logTimes(cv, 1e-3, 0.7, 80), CurveParameters.of(0, 0.5e-3, cv, 0));
+    AsaokaResult r = AsaokaMethod.fit(c, H);
+    assertThat(r.cv() / cv - 1).isCloseTo(0, within(0.01));
+    assertThat(r.hasWarning(FitWarning.Kind.READINGS_END_BEFORE_RANGE)).isTrue();
+  }
+
+  @Test
+  void rejectsBadInput() {
+    SettlementCurve good = ExactCurves.dense(2 / ExactCurves.YEAR, 0);
+    assertThatThrownBy(() -> AsaokaMethod.fit(good, 0))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("drainage path (0.0 m) must be finite and > 0");
+    assertThatThrownBy(() -> AsaokaMethod.fit(good, Double.NaN))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("drainage path (NaN m) must be finite and > 0");
+    SettlementCurve few =
+        SettlementCurve.of(
+            new double[] {0, 6, 15, 30, 60, 120}, new double[] {0, 1e-5, 2e-5, 3e-5, 4e-5, 5e-5});
+    assertThatThrownBy(() -> AsaokaMethod.fit(few, H))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("5 readings after t = 0 are too few for the Asaoka method (needs at least 6)");
+    assertThatThrownBy(() -> AsaokaOptions.defaults().withSteps(3))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("number of time steps (3) must be in [4, 200]");
+    SettlementCurve flat = SettlementCurve.of(good.elapsedSeconds(), new double[good.size()]);
+    assertThatThrownBy(() -> AsaokaMethod.fit(flat, H))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("the readings do not move");
+  }
+
+  @Test
+  @DisplayName("Swelling: the negated curve gives the same c_v, negated settlements, a warning")
+  void swelling() {
+    SettlementCurve up = ExactCurves.dense(2 / ExactCurves.YEAR, 0.01e-3);
+    AsaokaResult a = AsaokaMethod.fit(up, H);
+    AsaokaResult b = AsaokaMethod.fit(ExactCurves.negated(up), H);
+    assertThat(b.cv()).isCloseTo(a.cv(), within(1e-12 * a.cv()));
+    assertThat(b.finalSettlement()).isCloseTo(-a.finalSettlement(), within(1e-15));
+    assertThat(b.hasWarning(FitWarning.Kind.SWELLING_INCREMENT)).isTrue();
+  }
+}
