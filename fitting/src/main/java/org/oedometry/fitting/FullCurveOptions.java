@@ -9,7 +9,7 @@ import org.oedometry.theory.ConsolidationCurveModel;
  * {@code with...} methods.
  *
  * <p>Defaults: readings weighted to balance log-time ({@link ReadingWeights#LOG_TIME_BALANCE}),
- * secondary compression fitted, secondary onset T<sub>s</sub> = 1 (see {@link
+ * secondary compression fitted, secondary onset T<sub>s</sub> = 2 (see {@link
  * ConsolidationCurveModel}), 95 % confidence interval, at most 200 Levenberg-Marquardt iterations
  * per start.
  *

@@ -137,6 +137,9 @@ public final class DemoTestGenerator {
   /** C<sub>&alpha;</sub> / C<sub>c</sub> chosen (Mesri's ratio). */
   public static final double SECONDARY_RATIO = 0.04;
 
+  /** Onset time factor T_s of the secondary term the demo was generated with. */
+  public static final double SECONDARY_ONSET = 1.0;
+
   /** Instantaneous deformation as a fraction of each increment's d<sub>i</sub> + d<sub>p</sub>. */
   static final double INSTANTANEOUS_FRACTION = 0.05;
 
@@ -314,7 +317,7 @@ public final class DemoTestGenerator {
       double primary = total - instantaneous;
       double secondary = Math.signum(logChange) * SECONDARY_RATIO * slope * solidsHeight;
       double drainagePath = Drainage.DOUBLE.drainagePath(height - instantaneous - 0.5 * primary);
-      ConsolidationCurveModel model = ConsolidationCurveModel.of(drainagePath);
+      ConsolidationCurveModel model = new ConsolidationCurveModel(drainagePath, SECONDARY_ONSET);
       CurveParameters parameters =
           CurveParameters.of(
               instantaneous,

@@ -136,7 +136,9 @@ class DemoTestGeneratorTest {
       boolean logger = j == DemoTestGenerator.LOGGER_INCREMENT;
       SettlementCurve curve = TEST.increments().get(j).curve();
       IncrementTruth truth = TRUTH.get(j);
-      ConsolidationCurveModel model = ConsolidationCurveModel.of(truth.drainagePathMetres());
+      ConsolidationCurveModel model =
+          new ConsolidationCurveModel(
+              truth.drainagePathMetres(), DemoTestGenerator.SECONDARY_ONSET);
       double sum = 0;
       double largest = 0;
       for (int k = 1; k < curve.size(); k++) {
