@@ -1,7 +1,22 @@
 package org.oedometry.examples;
 
 import java.io.PrintStream;
+import java.util.List;
 import java.util.Locale;
+import java.util.function.BiFunction;
+import org.oedometry.core.LoadIncrement;
+import org.oedometry.core.OedometerTest;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.examples.demo.DemoTestGenerator;
+import org.oedometry.fitting.AsaokaMethod;
+import org.oedometry.fitting.CvEstimate;
+import org.oedometry.fitting.EarlySlopeMethod;
+import org.oedometry.fitting.FitException;
+import org.oedometry.fitting.FullCurveMethod;
+import org.oedometry.fitting.InflectionPointMethod;
+import org.oedometry.fitting.LogTimeMethod;
+import org.oedometry.fitting.RectangularHyperbolaMethod;
+import org.oedometry.fitting.RootTimeMethod;
 import org.oedometry.theory.ClayLayer;
 import org.oedometry.theory.Drainage;
 import org.oedometry.theory.Terzaghi;
@@ -93,6 +108,65 @@ public final class Demo {
               layer.timeFactorAt(seconds),
               100 * layer.degreeAt(seconds),
               1000 * layer.settlementAt(seconds)));
+    }
+    out.println();
+    printMethods(out, DemoTestGenerator.generate());
+  }
+
+  /** The per-increment methods, in the order of the table's columns. */
+  static final List<BiFunction<SettlementCurve, Double, CvEstimate>> METHODS =
+      List.of(
+          LogTimeMethod::fit,
+          RootTimeMethod::fit,
+          FullCurveMethod::fit,
+          InflectionPointMethod::fit,
+          RectangularHyperbolaMethod::fit,
+          EarlySlopeMethod::fit,
+          AsaokaMethod::fit);
+
+  /**
+   * Prints c_v of every increment of a test by every method, in m^2/yr, with the drainage path from
+   * the mean height of the increment (double drainage: half of it); "-" where a method finds no
+   * honest value, "*" after a value that carries warnings.
+   *
+   * @param out where to print
+   * @param test the test
+   */
+  static void printMethods(PrintStream out, OedometerTest test) {
+    double year = ClayLayer.SECONDS_PER_JULIAN_YEAR;
+    out.println("c_v (m^2/yr) of the INVENTED demo test (" + test.identifiers() + ")");
+    out.println(
+        "  drainage path: "
+            + test.drainage().name().toLowerCase(Locale.ROOT)
+            + " drainage, from the mean height of each increment; '-' no honest value, '*' value"
+            + " with warnings");
+    out.println(
+        "  incr  stress (kPa)   H_dr (mm)   log-time  root-time full-curve inflection  hyperbola"
+            + " early-slope   Asaoka");
+    for (int j = 0; j < test.increments().size(); j++) {
+      LoadIncrement increment = test.increments().get(j);
+      double path =
+          test.drainage()
+              .drainagePath((test.heightAtStartMetres(j) + test.heightAtEndMetres(j)) / 2);
+      StringBuilder row =
+          new StringBuilder(
+              format(
+                  "  %4d  %5.0f -> %5.0f  %8.3f ",
+                  j + 1,
+                  increment.stressBeforePascals() / 1000,
+                  increment.stressAfterPascals() / 1000,
+                  path * 1000));
+      for (BiFunction<SettlementCurve, Double, CvEstimate> method : METHODS) {
+        String cell;
+        try {
+          CvEstimate estimate = method.apply(increment.curve(), path);
+          cell = format("%.3g%s", estimate.cv() * year, estimate.warnings().isEmpty() ? "" : "*");
+        } catch (FitException e) {
+          cell = "-";
+        }
+        row.append(format(" %10s", cell));
+      }
+      out.println(row.toString().stripTrailing());
     }
   }
 

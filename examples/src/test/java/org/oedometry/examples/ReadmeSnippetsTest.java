@@ -69,7 +69,8 @@ class ReadmeSnippetsTest {
             .isEqualTo(Snippet.Status.VALID);
         assertThat(event.exception()).as("exception of %s", code).isNull();
         if (mark >= 0) {
-          BigDecimal expected = new BigDecimal(line.substring(mark + MARK.length()).strip());
+          BigDecimal expected =
+              new BigDecimal(line.substring(mark + MARK.length()).strip().split("\\s+")[0]);
           double halfUnit = 0.5 * expected.ulp().doubleValue();
           double value = Double.parseDouble(event.value());
           assertThat(Math.abs(value - expected.doubleValue()))

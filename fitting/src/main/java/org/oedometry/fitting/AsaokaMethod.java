@@ -69,6 +69,23 @@ public final class AsaokaMethod {
   public static final double WINDOW_END_DEGREE = 0.95;
 
   private static final int MINIMUM_READINGS = 6;
+
+  /** Readings (not resampled points) needed inside the window when the readings are resampled. */
+  static final int MINIMUM_READINGS_IN_WINDOW = 5;
+
+  /**
+   * Largest final settlement, as a multiple of the movement seen, that Asaoka's line may imply: at
+   * the end of its window (80 % consolidation or more) at most a quarter of the seen primary
+   * movement remains; a larger value means the late readings are dominated by creep.
+   */
+  static final double FINAL_MOVEMENT_LIMIT = 1.5;
+
+  /**
+   * Largest relative distance between an unsettled window's start and the t60 of its own c_v that
+   * is still taken as jitter of the window's edge rather than a wrong fixed point.
+   */
+  static final double UNSETTLED_WINDOW_TOLERANCE = 0.25;
+
   private static final int MAX_ITERATIONS = 30;
   private static final double SPACING_TOLERANCE = 1e-6;
 
@@ -164,6 +181,15 @@ public final class AsaokaMethod {
               : resample(logT, d, start, end, options.steps());
       fit = line(sample.values);
       rate = -4 * Math.log(fit[1]) / (Math.PI * Math.PI * sample.step);
+      double t60 = Math.max(t[0], startFactor / rate);
+      if (Math.abs(sample.start() - t60) > UNSETTLED_WINDOW_TOLERANCE * t60) {
+        throw new FitException(
+            Checks.format(
+                "the window of readings did not settle: it starts at %.4g s, but its own c_v puts"
+                    + " 60 %% consolidation at %.4g s (secondary compression or noise dominate the"
+                    + " readings that Asaoka's one-term line needs)",
+                sample.start(), t60));
+      }
     }
     double b0 = fit[0];
     double b1 = fit[1];
@@ -171,6 +197,31 @@ public final class AsaokaMethod {
     double finalSettlement = b0 / (1 - b1);
     if (!(cv > 0) || !Double.isFinite(cv) || !Double.isFinite(finalSettlement)) {
       throw new FitException("Asaoka's line gives no finite positive c_v");
+    }
+    double movement = d[n - 1] - d[0];
+    if (finalSettlement - d[0] > FINAL_MOVEMENT_LIMIT * movement) {
+      throw new FitException(
+          Checks.format(
+              "Asaoka's line implies a final settlement %.3g times the movement seen: the late"
+                  + " readings keep settling (secondary compression), which the one-term solution"
+                  + " behind the method cannot follow",
+              (finalSettlement - d[0]) / movement));
+    }
+    if (!equallySpaced) {
+      int inside = 0;
+      for (double time : t) {
+        if (time >= sample.start() && time <= sample.end()) {
+          inside++;
+        }
+      }
+      if (inside < MINIMUM_READINGS_IN_WINDOW) {
+        throw new FitException(
+            Checks.format(
+                "only %d readings lie between 60 %% and 95 %% consolidation (%.4g s to %.4g s):"
+                    + " resampling them at equal steps would invent the curve Asaoka's method"
+                    + " needs; it wants equally spaced or dense readings",
+                inside, sample.start(), sample.end()));
+      }
     }
     double t80 = Terzaghi.timeFactor(COMPLETE_ENOUGH) / rate;
     if (lastTime < t80) {

@@ -141,4 +141,43 @@ class AsaokaMethodTest {
     assertThat(b.finalSettlement()).isCloseTo(-a.finalSettlement(), within(1e-15));
     assertThat(b.hasWarning(FitWarning.Kind.SWELLING_INCREMENT)).isTrue();
   }
+
+  @Test
+  @DisplayName(
+      "Secondary compression on a data logger (s = 1 % to 30 % of d_p per log cycle): either a"
+          + " c_v within 10 % of the truth or a FitException, never a c_v many times too small")
+  void creepNeverGivesASilentlyWrongValue() {
+    double cv = 2 / ExactCurves.YEAR;
+    int refused = 0;
+    for (double ratio : new double[] {0.01, 0.03, 0.1, 0.3}) {
+      SettlementCurve c =
+          ExactCurves.curve(
+              ExactCurves.equalTimes(10, 8640),
+              CurveParameters.of(0.01e-3, 0.5e-3, cv, ratio * 0.5e-3));
+      try {
+        AsaokaResult r = AsaokaMethod.fit(c, H);
+        assertThat(r.cv() / cv - 1).as("creep ratio %s", ratio).isCloseTo(0, within(0.10));
+      } catch (FitException e) {
+        refused++;
+      }
+    }
+    assertThat(refused).as("the strongest creep is refused").isGreaterThanOrEqualTo(1);
+  }
+
+  @Test
+  @DisplayName(
+      "The usual 14-reading lab schedule has too few readings between 60 % and 95 % to resample:"
+          + " FitException")
+  void sparseLabSchedule() {
+    double[] minutes = {0.1, 0.25, 0.5, 1, 2, 4, 8, 15, 30, 60, 120, 240, 480, 1440};
+    double[] times = new double[minutes.length];
+    for (int i = 0; i < times.length; i++) {
+      times[i] = 60 * minutes[i];
+    }
+    SettlementCurve c =
+        ExactCurves.curve(times, CurveParameters.of(0.01e-3, 0.5e-3, 2 / ExactCurves.YEAR, 0));
+    assertThatThrownBy(() -> AsaokaMethod.fit(c, H))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("readings lie between 60 % and 95 % consolidation");
+  }
 }

@@ -24,7 +24,7 @@ import org.oedometry.fitting.RootTimeMethod;
 
 /**
  * The varied synthetic study of issue 4 (targets from the issue; cases from {@link SyntheticStudy},
- * seed {@value #SEED}). Writes the measured table to target/synthetic-study.md and prints it.
+ * seed {@value #SEED}). Writes the measured table to target/synthetic-study.md.
  */
 class SyntheticStudyTest {
 
@@ -157,7 +157,6 @@ class SyntheticStudyTest {
             + " cases per family and schedule; complete families: pure Terzaghi, creep after"
             + " primary, smooth creep, swelling)\n\n"
             + table;
-    System.out.println(text);
     Path out = Path.of("target", "synthetic-study.md");
     Files.createDirectories(out.getParent());
     Files.writeString(out, text, StandardCharsets.UTF_8);
