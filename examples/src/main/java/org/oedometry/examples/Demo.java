@@ -1,6 +1,8 @@
 package org.oedometry.examples;
 
+import java.io.IOException;
 import java.io.PrintStream;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.BiFunction;
@@ -8,6 +10,7 @@ import org.oedometry.core.LoadIncrement;
 import org.oedometry.core.OedometerTest;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.examples.demo.DemoTestGenerator;
+import org.oedometry.examples.plots.PlotGallery;
 import org.oedometry.fitting.AsaokaMethod;
 import org.oedometry.fitting.CvEstimate;
 import org.oedometry.fitting.EarlySlopeMethod;
@@ -53,12 +56,21 @@ public final class Demo {
   private Demo() {}
 
   /**
-   * Prints the demo to standard output.
+   * Prints the demo to standard output and writes the charts of the demo test.
    *
-   * @param args ignored
+   * @param args optional: the folder for the charts (default examples/target/demo)
+   * @throws IOException if a chart cannot be written
    */
-  public static void main(String[] args) {
+  public static void main(String[] args) throws IOException {
     print(System.out);
+    Path folder = Path.of(args.length > 0 ? args[0] : "examples/target/demo");
+    List<Path> charts = PlotGallery.write(DemoTestGenerator.generate(), "demo", folder);
+    System.out.println();
+    System.out.println(
+        "Wrote "
+            + charts.size()
+            + " charts (PNG) of the invented demo test to "
+            + folder.toAbsolutePath());
   }
 
   /**

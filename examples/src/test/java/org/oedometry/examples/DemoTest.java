@@ -1,6 +1,7 @@
 package org.oedometry.examples;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.io.ByteArrayOutputStream;
 import java.io.PrintStream;
@@ -42,5 +43,30 @@ class DemoTest {
     assertThat(text)
         .contains(String.format(java.util.Locale.ROOT, "%6.1f", 180 * degree))
         .contains("20.00   3.3333");
+  }
+
+  @Test
+  @DisplayName(
+      "The methods table has a row per demo increment, and the full-curve c_v of the data-logger"
+          + " increment is within 10 % of the 1.4 m^2/yr it was made with (the generator's truth)")
+  void printsEveryMethodOnEveryIncrement() {
+    String[] lines = output().split("\\R");
+    int rows = 0;
+    String logger = null;
+    for (String line : lines) {
+      if (line.matches("\\s+\\d+\\s+\\d+ ->\\s+\\d+\\s+.*")) {
+        rows++;
+        if (line.trim().startsWith("6 ")) {
+          logger = line;
+        }
+      }
+    }
+    assertThat(rows)
+        .isEqualTo(org.oedometry.examples.demo.DemoTestGenerator.generate().increments().size());
+    assertThat(logger).isNotNull();
+    String[] cells = logger.trim().split("\\s+");
+    // incr, before, ->, after, H_dr, log-time, root-time, full-curve, ...
+    double fullCurve = Double.parseDouble(cells[7].replace("*", ""));
+    assertThat(fullCurve).isCloseTo(1.4, within(0.14));
   }
 }

@@ -34,7 +34,9 @@ import org.oedometry.theory.Terzaghi;
  * <ol>
  *   <li>Readings after t = 0 are used (the zero reading is left out, with a warning); a swelling
  *       increment is treated by its magnitude and reported in the input's sign.
- *   <li>With x = log<sub>10</sub>(t / 1 s), each reading is the centre of a local window: the
+ *   <li>With x = log<sub>10</sub>(t / 1 s), points every 0.02 cycle from the first to the last
+ *       reading ({@link #SCAN_STEP}; a grid rather than every reading, so that a data logger's
+ *       thousands of readings keep the cost linear) are each the centre of a local window: the
  *       readings within &plusmn;h of it, h being the option's half-width (default 0.2 cycle),
  *       widened where readings are sparse until the window holds the option's number of readings
  *       (default 7). So a data logger's dense readings give a narrow, local window and a lab
@@ -90,6 +92,9 @@ public final class InflectionPointMethod {
       Math.log(10)
           * INFLECTION_TIME_FACTOR
           * Terzaghi.averageDegreeDerivative(INFLECTION_TIME_FACTOR);
+
+  /** Step of the grid of candidate centres for the steepest slope, in log10 cycles. */
+  static final double SCAN_STEP = 0.02;
 
   private static final int MINIMUM_READINGS = 8;
 
@@ -177,35 +182,40 @@ public final class InflectionPointMethod {
     double[] d = readings.movement;
 
     // 1. Steepest local slope from quadratic fits centred on each reading.
-    int steepest = -1;
+    // Candidate centres on a grid of SCAN_STEP log cycle (not at every reading: a data logger's
+    // thousands of readings would make the scan quadratic in their number).
+    double steepestCentre = Double.NaN;
     double steepestSlope = Double.NEGATIVE_INFINITY;
-    for (int i = 0; i < n; i++) {
-      int[] window = window(x, x[i], options);
-      double[] c = fitAround(x, d, window, x[i], 2);
+    int scanSteps = (int) Math.ceil((x[n - 1] - x[0]) / SCAN_STEP);
+    for (int k = 0; k <= scanSteps; k++) {
+      double candidate = Math.min(x[n - 1], x[0] + k * SCAN_STEP);
+      int[] window = window(x, candidate, options);
+      double[] c = fitAround(x, d, window, candidate, 2);
       if (c != null && c[1] > steepestSlope) {
         steepestSlope = c[1];
-        steepest = i;
+        steepestCentre = candidate;
       }
     }
-    if (steepest < 0 || !(steepestSlope > 0)) {
+    if (Double.isNaN(steepestCentre) || !(steepestSlope > 0)) {
       throw new FitException(
           "the settlement does not rise against log time anywhere: no inflection to find");
     }
-    if (steepest <= 1 || steepest >= n - 2) {
+    boolean atStart = steepestCentre <= x[1];
+    if (atStart || steepestCentre >= x[n - 2]) {
       throw new FitException(
           Checks.format(
               "no inflection on the log-time curve: the steepest part is at the %s readings (t ="
                   + " %.4g s); %s",
-              steepest <= 1 ? "first" : "last",
-              readings.times[steepest],
-              steepest <= 1
+              atStart ? "first" : "last",
+              Math.pow(10, steepestCentre),
+              atStart
                   ? "primary consolidation may have passed its steepest point before the first"
                       + " reading"
                   : "primary consolidation may not be complete"));
     }
 
     // 2. Cubic fits, moved onto the zero of their second derivative.
-    double centre = x[steepest];
+    double centre = steepestCentre;
     double[] local = null;
     int[] window = null;
     boolean settled = false;
