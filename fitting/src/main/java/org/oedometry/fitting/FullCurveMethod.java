@@ -33,12 +33,13 @@ import org.oedometry.theory.CurveParameters;
  *       from 0.02 to 20 000, the model is linear in (d<sub>i</sub>, d<sub>p</sub>, s) and is solved
  *       exactly under d<sub>p</sub> &ge; 0, s &ge; 0 (a profile of the residual over c<sub>v
  *       </sub>). The lowest local minima of that profile (up to three, each within a factor of 4 of
- *       the lowest residual, and with a primary settlement) start Levenberg-Marquardt
- *       (commons-math3, analytic Jacobian from {@link ConsolidationCurveModel}, parameters
- *       d<sub>i</sub>, d<sub>p</sub>, ln c<sub>v</sub>, s, with d<sub>p</sub> &ge; 0 and s &ge; 0
- *       in the direction of movement: a large primary term cancelled by a negative secondary term
- *       cannot mimic a slow curve). The best fit is kept; the result says how many starts reached
- *       it.
+ *       the lowest residual, and with a primary settlement), and the c<sub>v</sub> of the log-time
+ *       and root-time constructions where they succeed (their linear parameters solved the same
+ *       way), start Levenberg-Marquardt (commons-math3, analytic Jacobian from {@link
+ *       ConsolidationCurveModel}, parameters d<sub>i</sub>, d<sub>p</sub>, ln c<sub>v</sub>, s,
+ *       with d<sub>p</sub> &ge; 0 and s &ge; 0 in the direction of movement: a large primary term
+ *       cancelled by a negative secondary term cannot mimic a slow curve). The best fit is kept;
+ *       the result says how many starts reached it.
  *   <li>Interval: the standard error of ln c<sub>v</sub> from the covariance of the parameters,
  *       with the readings' noise variance estimated from the unweighted residuals (&Sigma;r<sup>2
  *       </sup>/(n - p)), by the sandwich A<sup>-1</sup>BA<sup>-1</sup> (A = J<sup>T</sup>WJ, B =
@@ -212,12 +213,25 @@ public final class FullCurveMethod {
     WeightedLeastSquares.Solution best = null;
     List<Double> reachedLogCv = new ArrayList<>();
     FitException lastFailure = null;
+    List<double[]> starts = new ArrayList<>();
     for (int index : startIndices) {
-      double[] linear = profileLinear[index];
-      double[] start =
-          parameterCount == 4
-              ? new double[] {linear[0], linear[1], profileLogCv[index], linear[2]}
-              : new double[] {linear[0], linear[1], profileLogCv[index]};
+      starts.add(startVector(profileLinear[index], profileLogCv[index], parameterCount));
+    }
+    // The log-time and root-time constructions, where they succeed, give further starts.
+    for (double constructionCv : constructionCvs(curve, drainagePathMetres)) {
+      double[] linear =
+          linearFit(
+              model,
+              constructionCv,
+              profileTimes,
+              profileY,
+              profileWeights,
+              options.fitSecondary());
+      if (linear != null && linear[1] > 0) {
+        starts.add(startVector(linear, Math.log(constructionCv), parameterCount));
+      }
+    }
+    for (double[] start : starts) {
       try {
         WeightedLeastSquares.Solution solution =
             solver.solve(
@@ -361,13 +375,13 @@ public final class FullCurveMethod {
                       + " unfinished curve",
                   endFactor, lowEndFactor)));
     }
-    if (2 * atBest < startIndices.size()) {
+    if (2 * atBest < starts.size()) {
       warnings.add(
           new FitWarning(
               FitWarning.Kind.STARTS_DISAGREE,
               Checks.format(
                   "only %d of %d least-squares starts reached the best fit",
-                  atBest, startIndices.size())));
+                  atBest, starts.size())));
     }
     List<PlotPoint> plotted = new ArrayList<>(CURVE_POINTS);
     double logFirst = Math.log10(t[0]);
@@ -396,12 +410,35 @@ public final class FullCurveMethod {
         rSquared,
         best.iterations(),
         best.evaluations(),
-        startIndices.size(),
+        starts.size(),
         atBest,
         drainagePathMetres,
         endFactor,
         plotted,
         warnings);
+  }
+
+  /** A start (d_i, d_p, ln c_v[, s]) from a linear solution {d_i, d_p, s, rss}. */
+  private static double[] startVector(double[] linear, double logCv, int parameterCount) {
+    return parameterCount == 4
+        ? new double[] {linear[0], linear[1], logCv, linear[2]}
+        : new double[] {linear[0], linear[1], logCv};
+  }
+
+  /** c_v of the log-time and root-time constructions, those that succeed, m^2/s. */
+  private static List<Double> constructionCvs(SettlementCurve curve, double drainagePath) {
+    List<Double> values = new ArrayList<>(2);
+    try {
+      values.add(LogTimeMethod.fit(curve, drainagePath).cv());
+    } catch (FitException | IllegalArgumentException e) {
+      // No construction start from this method: the profile starts remain.
+    }
+    try {
+      values.add(RootTimeMethod.fit(curve, drainagePath).cv());
+    } catch (FitException | IllegalArgumentException e) {
+      // As above.
+    }
+    return values;
   }
 
   /**

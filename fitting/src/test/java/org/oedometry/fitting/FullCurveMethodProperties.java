@@ -1,0 +1,110 @@
+package org.oedometry.fitting;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.doubles;
+import static org.quicktheories.generators.SourceDSL.longs;
+
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.theory.CurveParameters;
+
+/** Invariances of the full-curve fit (QuickTheories, fixed seed). */
+class FullCurveMethodProperties {
+
+  private static final long SEED = 20261201L;
+
+  /** A noisy lab-schedule curve from our forward model with c_v in [0.3, 30] m^2/yr. */
+  private static SettlementCurve curve(double cvPerYear, long seed) {
+    CurveParameters truth =
+        CurveParameters.of(0.02e-3, 0.5e-3, cvPerYear / FullCurveMethodTest.YEAR, 0.02e-3);
+    return FullCurveMethodTest.curve(
+        FullCurveMethodTest.labSchedule(), truth, 1e-6, new SplittableRandom(seed));
+  }
+
+  @Test
+  @DisplayName("Scaling time by k scales c_v by 1/k; scaling settlement by k leaves c_v unchanged")
+  void scaling() {
+    qt().withFixedSeed(SEED)
+        .withExamples(25)
+        .forAll(doubles().between(-0.5, 1.5), doubles().between(-1, 1), longs().all())
+        .checkAssert(
+            (logCv, logK, seed) -> {
+              double k = Math.pow(10, logK);
+              SettlementCurve c = curve(Math.pow(10, logCv), seed);
+              FullCurveResult base = FullCurveMethod.fit(c, FullCurveMethodTest.DRAINAGE_PATH);
+              double[] t = c.elapsedSeconds();
+              double[] d = c.settlementMetres();
+              double[] slower = new double[t.length];
+              double[] larger = new double[d.length];
+              for (int i = 0; i < t.length; i++) {
+                slower[i] = k * t[i];
+                larger[i] = k * d[i];
+              }
+              FullCurveResult timeScaled =
+                  FullCurveMethod.fit(
+                      SettlementCurve.of(slower, d), FullCurveMethodTest.DRAINAGE_PATH);
+              FullCurveResult settlementScaled =
+                  FullCurveMethod.fit(
+                      SettlementCurve.of(t, larger), FullCurveMethodTest.DRAINAGE_PATH);
+              assertThat(timeScaled.cv() * k / base.cv()).isCloseTo(1, within(1e-4));
+              assertThat(settlementScaled.cv() / base.cv()).isCloseTo(1, within(1e-4));
+              assertThat(settlementScaled.d100() / (k * base.d100())).isCloseTo(1, within(1e-4));
+            });
+  }
+
+  @Test
+  @DisplayName(
+      "Adding a constant to every settlement shifts d0 and d100 by it; the interval always holds"
+          + " c_v")
+  void offsetAndInterval() {
+    qt().withFixedSeed(SEED)
+        .withExamples(25)
+        .forAll(doubles().between(-0.5, 1.5), doubles().between(-1e-3, 1e-3), longs().all())
+        .checkAssert(
+            (logCv, offset, seed) -> {
+              SettlementCurve c = curve(Math.pow(10, logCv), seed);
+              FullCurveResult base = FullCurveMethod.fit(c, FullCurveMethodTest.DRAINAGE_PATH);
+              double[] d = c.settlementMetres();
+              for (int i = 0; i < d.length; i++) {
+                d[i] += offset;
+              }
+              FullCurveResult shifted =
+                  FullCurveMethod.fit(
+                      SettlementCurve.of(c.elapsedSeconds(), d), FullCurveMethodTest.DRAINAGE_PATH);
+              assertThat(shifted.d0() - base.d0()).isCloseTo(offset, within(1e-9));
+              assertThat(shifted.d100() - base.d100()).isCloseTo(offset, within(1e-9));
+              assertThat(shifted.cv() / base.cv()).isCloseTo(1, within(1e-4));
+              assertThat(base.cvLow()).isLessThanOrEqualTo(base.cv());
+              assertThat(base.cvHigh()).isGreaterThanOrEqualTo(base.cv());
+            });
+  }
+
+  @Test
+  @DisplayName("Noise alone (no consolidation in the readings): a FitException or a warned result")
+  void noiseOnly() {
+    qt().withFixedSeed(SEED)
+        .withExamples(40)
+        .forAll(longs().all())
+        .checkAssert(
+            seed -> {
+              SplittableRandom random = new SplittableRandom(seed);
+              double[] t = FullCurveMethodTest.labSchedule();
+              double[] d = new double[t.length];
+              for (int i = 0; i < d.length; i++) {
+                d[i] = 1e-6 * FullCurveMethodTest.gaussian(random);
+              }
+              try {
+                FullCurveResult r =
+                    FullCurveMethod.fit(
+                        SettlementCurve.of(t, d), FullCurveMethodTest.DRAINAGE_PATH);
+                assertThat(r.warnings()).as(r.toString()).isNotEmpty();
+              } catch (FitException e) {
+                assertThat(e.getMessage()).isNotBlank();
+              }
+            });
+  }
+}
