@@ -34,12 +34,12 @@ import org.oedometry.theory.CurveParameters;
  *       exactly under d<sub>p</sub> &ge; 0, s &ge; 0 (a profile of the residual over c<sub>v
  *       </sub>). The lowest local minima of that profile (up to three, each within a factor of 4 of
  *       the lowest residual, and with a primary settlement), and the c<sub>v</sub> of the log-time
- *       and root-time constructions where they succeed (their linear parameters solved the same
- *       way), start Levenberg-Marquardt (commons-math3, analytic Jacobian from {@link
- *       ConsolidationCurveModel}, parameters d<sub>i</sub>, d<sub>p</sub>, ln c<sub>v</sub>, s,
- *       with d<sub>p</sub> &ge; 0 and s &ge; 0 in the direction of movement: a large primary term
- *       cancelled by a negative secondary term cannot mimic a slow curve). The best fit is kept;
- *       the result says how many starts reached it.
+ *       and root-time constructions where they succeed and differ from those by more than 10 %
+ *       (their linear parameters solved the same way), start Levenberg-Marquardt (commons-math3,
+ *       analytic Jacobian from {@link ConsolidationCurveModel}, parameters d<sub>i</sub>,
+ *       d<sub>p</sub>, ln c<sub>v</sub>, s, with d<sub>p</sub> &ge; 0 and s &ge; 0 in the direction
+ *       of movement: a large primary term cancelled by a negative secondary term cannot mimic a
+ *       slow curve). The best fit is kept; the result says how many starts reached it.
  *   <li>Interval: the standard error of ln c<sub>v</sub> from the covariance of the parameters,
  *       with the readings' noise variance estimated from the unweighted residuals (&Sigma;r<sup>2
  *       </sup>/(n - p)), by the sandwich A<sup>-1</sup>BA<sup>-1</sup> (A = J<sup>T</sup>WJ, B =
@@ -82,6 +82,9 @@ public final class FullCurveMethod {
 
   /** Readings used for the profile of start values, at most. */
   private static final int PROFILE_READINGS = 300;
+
+  /** Starts whose ln c_v differ by less than this (10 %) are one start: the later is skipped. */
+  private static final double SAME_START = 0.1;
 
   /** A profile minimum whose residual exceeds the lowest by more than this is not a start. */
   private static final double START_RESIDUAL_FACTOR = 4.0;
@@ -227,8 +230,10 @@ public final class FullCurveMethod {
               profileY,
               profileWeights,
               options.fitSecondary());
-      if (linear != null && linear[1] > 0) {
-        starts.add(startVector(linear, Math.log(constructionCv), parameterCount));
+      double logCv = Math.log(constructionCv);
+      boolean near = starts.stream().anyMatch(st -> Math.abs(st[2] - logCv) < SAME_START);
+      if (linear != null && linear[1] > 0 && !near) {
+        starts.add(startVector(linear, logCv, parameterCount));
       }
     }
     for (double[] start : starts) {
