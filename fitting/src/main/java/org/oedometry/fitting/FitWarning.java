@@ -62,7 +62,32 @@ public record FitWarning(Kind kind, String message) {
      * The readings are not equally spaced in time and were resampled at equal steps by a
      * shape-preserving interpolation (Asaoka's method).
      */
-    READINGS_RESAMPLED
+    READINGS_RESAMPLED,
+    /**
+     * A c<sub>v</sub> method gave no value for this increment (it threw {@link FitException} or
+     * rejected the readings); the whole-test reduction records the reason and goes on.
+     */
+    METHOD_GAVE_NO_VALUE,
+    /**
+     * Two c<sub>v</sub> methods compared by the whole-test reduction (by default log-time and
+     * root-time) differ by more than the factor set in its options.
+     */
+    METHODS_DISAGREE,
+    /**
+     * The primary compression ratio of the log-time construction lies outside the range the
+     * whole-test reduction treats as usual.
+     */
+    PRIMARY_RATIO_UNUSUAL,
+    /**
+     * The drainage path rule needs the height at 50 % consolidation, but no construction gave
+     * d<sub>0</sub> and d<sub>100</sub>: the mean height of the increment was used instead.
+     */
+    DRAINAGE_PATH_FALLBACK,
+    /**
+     * The e &ndash; log &sigma;' point of the increment should sit at the end of primary
+     * consolidation, but no construction gave d<sub>100</sub>: the end of the increment was used.
+     */
+    END_OF_PRIMARY_NOT_KNOWN
   }
 
   /**

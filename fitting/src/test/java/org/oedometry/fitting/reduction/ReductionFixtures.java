@@ -1,0 +1,113 @@
+package org.oedometry.fitting.reduction;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.oedometry.core.DrainagePathRule;
+import org.oedometry.core.LoadIncrement;
+import org.oedometry.core.OedometerTest;
+import org.oedometry.core.SettlementCurve;
+import org.oedometry.core.Specimen;
+import org.oedometry.core.TestIdentifiers;
+import org.oedometry.fitting.synthetic.ReadingSchedules;
+import org.oedometry.theory.ConsolidationCurveModel;
+import org.oedometry.theory.CurveParameters;
+import org.oedometry.theory.Drainage;
+
+/**
+ * Small invented tests built from exact Terzaghi curves (no noise) on the usual lab schedule with a
+ * zero reading: four loading increments 25 -> 50 -> 100 -> 200 -> 400 kPa.
+ */
+final class ReductionFixtures {
+
+  static final double YEAR = 365.25 * 86_400;
+  static final double[] STRESSES_KPA = {25, 50, 100, 200, 400};
+  static final double[] CV_PER_YEAR = {6, 4, 2, 2.5};
+  static final double[] PRIMARY_MM = {0.15, 0.45, 0.9, 0.8};
+
+  private ReductionFixtures() {}
+
+  /**
+   * The fixture with a straight-line third increment, reduced with the default options once per
+   * test run: it holds present values and absent ones with reasons.
+   */
+  static TestReport mixedReport() {
+    return Holder.MIXED;
+  }
+
+  private static final class Holder {
+    static final TestReport MIXED = TestReduction.reduce(withStraightLineIncrement(2));
+  }
+
+  static Specimen specimen() {
+    return Specimen.builder()
+        .initialHeight(0.020)
+        .diameter(0.075)
+        .specificGravity(2.70)
+        .dryMass(0.1150)
+        .initialWaterContent(0.38)
+        .build();
+  }
+
+  /** True drainage path of increment j: half the height at 50 % primary consolidation. */
+  static List<Double> truePaths(double cvScale) {
+    List<Double> out = new ArrayList<>();
+    build(Drainage.DOUBLE, DrainagePathRule.HEIGHT_AT_HALF_CONSOLIDATION, -1, out, cvScale);
+    return out;
+  }
+
+  static OedometerTest test(Drainage drainage, DrainagePathRule rule) {
+    return build(drainage, rule, -1, new ArrayList<>(), 1);
+  }
+
+  /** The test with increment {@code broken} replaced by a straight line in log t. */
+  static OedometerTest withStraightLineIncrement(int broken) {
+    return build(
+        Drainage.DOUBLE,
+        DrainagePathRule.HEIGHT_AT_HALF_CONSOLIDATION,
+        broken,
+        new ArrayList<>(),
+        1);
+  }
+
+  static OedometerTest scaled(double cvScale) {
+    return build(
+        Drainage.DOUBLE,
+        DrainagePathRule.HEIGHT_AT_HALF_CONSOLIDATION,
+        -1,
+        new ArrayList<>(),
+        cvScale);
+  }
+
+  private static OedometerTest build(
+      Drainage drainage, DrainagePathRule rule, int broken, List<Double> paths, double cvScale) {
+    double[] times = ReadingSchedules.withZeroReading(ReadingSchedules.usualLab());
+    List<LoadIncrement> increments = new ArrayList<>();
+    double height = 0.020;
+    for (int j = 0; j < CV_PER_YEAR.length; j++) {
+      double dp = PRIMARY_MM[j] / 1000;
+      double di = 0.05 * dp;
+      double s = 0.03 * dp;
+      double path = Drainage.DOUBLE.drainagePath(height - di - 0.5 * dp);
+      paths.add(path);
+      ConsolidationCurveModel model = ConsolidationCurveModel.of(path);
+      CurveParameters p = CurveParameters.of(di, dp, cvScale * CV_PER_YEAR[j] / YEAR, s);
+      double[] d = new double[times.length];
+      for (int k = 1; k < times.length; k++) {
+        d[k] =
+            j == broken
+                ? dp * 0.2 * Math.log10(times[k] / times[1]) + 1e-6 * k
+                : model.settlement(times[k], p);
+      }
+      SettlementCurve curve = SettlementCurve.of(times, d);
+      increments.add(LoadIncrement.of(STRESSES_KPA[j] * 1000, STRESSES_KPA[j + 1] * 1000, curve));
+      height -= curve.finalSettlementMetres();
+    }
+    return OedometerTest.builder(specimen())
+        .drainage(drainage)
+        .drainagePathRule(rule)
+        .identifiers(
+            TestIdentifiers.of("Invented \"fixture\" project, for tests", "BH-T1", "S1", "3.5 m"))
+        .increments(increments)
+        .build();
+  }
+}

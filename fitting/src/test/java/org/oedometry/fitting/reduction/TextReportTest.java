@@ -1,0 +1,87 @@
+package org.oedometry.fitting.reduction;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.Arrays;
+import java.util.List;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.oedometry.fitting.CvMethod;
+
+class TextReportTest {
+
+  private static final double YEAR = 365.25 * 86_400;
+  private static final TestReport REPORT = ReductionFixtures.mixedReport();
+
+  @Test
+  @DisplayName(
+      "Each table row shows the stress range in kPa and each method's c_v in m2/yr to 3 figures"
+          + " ('-' when absent), m_v in m2/MN and k in m/s")
+  void tableRowsHoldTheReportValues() {
+    List<String> lines = REPORT.toText().lines().toList();
+    int header = 0;
+    while (!lines.get(header).startsWith("Inc ")) {
+      header++;
+    }
+    List<CvMethod> methods = REPORT.options().methods();
+    for (int j = 0; j < REPORT.increments().size(); j++) {
+      IncrementReport inc = REPORT.increments().get(j);
+      String[] cells = lines.get(header + 2 + j).trim().split("\\s+");
+      // Cells: number, stress before, "->", stress after, t50, t90, one c_v per method, d0, d100,
+      // primary ratio, C_ae, m_v, k, class (which may hold a space).
+      assertThat(cells[0]).isEqualTo(Integer.toString(j + 1));
+      assertThat(Double.parseDouble(cells[1]))
+          .isCloseTo(
+              inc.stressBeforePascals() / 1000, within(5e-4 * inc.stressBeforePascals() / 1000));
+      assertThat(Double.parseDouble(cells[3]))
+          .isCloseTo(
+              inc.stressAfterPascals() / 1000, within(5e-4 * inc.stressAfterPascals() / 1000));
+      for (int m = 0; m < methods.size(); m++) {
+        String cell = cells[6 + m];
+        if (inc.cv(methods.get(m)).isEmpty()) {
+          assertThat(cell).isEqualTo("-");
+        } else {
+          double cv = inc.cv(methods.get(m)).getAsDouble() * YEAR;
+          assertThat(Double.parseDouble(cell)).isCloseTo(cv, within(5e-3 * cv));
+        }
+      }
+      int after = 6 + methods.size();
+      double mv = inc.mv().getAsDouble() * 1e6;
+      assertThat(Double.parseDouble(cells[after + 4]))
+          .isCloseTo(mv, within(5e-5 + 1e-3 * Math.abs(mv)));
+      if (inc.permeability().isPresent()) {
+        double k = inc.permeability().getAsDouble();
+        assertThat(Double.parseDouble(cells[after + 5])).isCloseTo(k, within(5e-3 * k));
+      }
+      String history = String.join(" ", Arrays.copyOfRange(cells, after + 6, cells.length));
+      assertThat(history)
+          .isEqualTo(inc.stressHistory().value().map(ReportUnits::shortClass).orElse("-"));
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "The text names each increment's H_dr with its rule, every method with its reference, every"
+          + " warning, and the summary quantities")
+  void tracesEveryNumber() {
+    String text = REPORT.toText();
+    for (IncrementReport inc : REPORT.increments()) {
+      assertThat(text).contains(inc.drainagePath().explanation());
+      for (ReductionWarning w : inc.warnings()) {
+        assertThat(text).contains(w.message());
+      }
+    }
+    for (CvMethod m : REPORT.options().methods()) {
+      assertThat(text).contains(m.reference());
+    }
+    assertThat(text)
+        .contains(
+            "Initial void ratio e0: "
+                + String.format(java.util.Locale.ROOT, "%.4f", REPORT.initialVoidRatio()))
+        .contains("Compression index C_c")
+        .contains("Permeability change index C_k")
+        .contains("Preconsolidation pressure sigma'_p")
+        .contains("reviewed by a qualified engineer");
+  }
+}
