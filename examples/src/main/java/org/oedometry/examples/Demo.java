@@ -2,31 +2,26 @@ package org.oedometry.examples;
 
 import java.io.IOException;
 import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.function.BiFunction;
-import org.oedometry.core.LoadIncrement;
 import org.oedometry.core.OedometerTest;
-import org.oedometry.core.SettlementCurve;
+import org.oedometry.core.io.OedometerTestCsvReader;
+import org.oedometry.core.io.TestDataException;
 import org.oedometry.examples.demo.DemoTestGenerator;
 import org.oedometry.examples.plots.PlotGallery;
-import org.oedometry.fitting.AsaokaMethod;
-import org.oedometry.fitting.CvEstimate;
-import org.oedometry.fitting.EarlySlopeMethod;
-import org.oedometry.fitting.FitException;
-import org.oedometry.fitting.FullCurveMethod;
-import org.oedometry.fitting.InflectionPointMethod;
-import org.oedometry.fitting.LogTimeMethod;
-import org.oedometry.fitting.RectangularHyperbolaMethod;
-import org.oedometry.fitting.RootTimeMethod;
+import org.oedometry.fitting.reduction.TestReduction;
+import org.oedometry.fitting.reduction.TestReport;
 import org.oedometry.theory.ClayLayer;
 import org.oedometry.theory.Drainage;
 import org.oedometry.theory.Terzaghi;
 
 /**
- * The demo that README's first command runs: Terzaghi's U-T table and a field time-settlement
- * forecast for an invented clay layer.
+ * The demo that README's first command runs: Terzaghi's U-T table, a field time-settlement forecast
+ * for an invented clay layer, and the whole reduction of the invented demo test (or of a user's
+ * test in the core CSV format) with its report files and charts.
  *
  * <p>The layer is <b>invented, for demonstration</b>: 6 m of soft clay under a made-up riverside
  * warehouse floor, sand above and below (double drainage), c<sub>v</sub> = 1.5 m<sup>2</sup>/yr and
@@ -56,21 +51,69 @@ public final class Demo {
   private Demo() {}
 
   /**
-   * Prints the demo to standard output and writes the charts of the demo test.
+   * Runs the demo (see {@link #run(String[], PrintStream, PrintStream)}) and exits with its code
+   * when that is not 0.
    *
-   * @param args optional: the folder for the charts (default examples/target/demo)
-   * @throws IOException if a chart cannot be written
+   * @param args [output folder [folder of a test in the core CSV format]]
    */
-  public static void main(String[] args) throws IOException {
-    print(System.out);
+  public static void main(String[] args) {
+    int code = run(args, System.out, System.err);
+    if (code != 0) {
+      System.exit(code);
+    }
+  }
+
+  /**
+   * The demo: prints the U-T table and the field forecast, reduces a test (the invented demo test,
+   * or the user's test read from a folder of the core CSV format), prints the report and writes
+   * report.csv, report.json, report.ags and the charts (PNG) to the output folder.
+   *
+   * @param args optional: the output folder (default examples/target/demo), then the folder of a
+   *     test to reduce instead of the demo test
+   * @param out where the report is printed
+   * @param err where a bad input file is explained
+   * @return 0 on success, 2 for a bad or unreadable input test, 3 if an output cannot be written
+   */
+  static int run(String[] args, PrintStream out, PrintStream err) {
     Path folder = Path.of(args.length > 0 ? args[0] : "examples/target/demo");
-    List<Path> charts = PlotGallery.write(DemoTestGenerator.generate(), "demo", folder);
-    System.out.println();
-    System.out.println(
-        "Wrote "
-            + charts.size()
-            + " charts (PNG) of the invented demo test to "
-            + folder.toAbsolutePath());
+    OedometerTest test;
+    String name;
+    if (args.length > 1) {
+      Path input = Path.of(args[1]);
+      try {
+        test = OedometerTestCsvReader.read(input);
+      } catch (TestDataException e) {
+        err.println("The test in " + input + " cannot be read: " + e.getMessage());
+        return 2;
+      } catch (IOException e) {
+        err.println("The test in " + input + " cannot be read: " + e);
+        return 2;
+      }
+      name = input.getFileName() == null ? "test" : input.getFileName().toString();
+    } else {
+      print(out);
+      test = DemoTestGenerator.generate();
+      name = "demo";
+    }
+    TestReport report = TestReduction.reduce(test);
+    out.println();
+    out.println(report.toText());
+    try {
+      Files.createDirectories(folder);
+      Files.writeString(folder.resolve("report.csv"), report.toCsv(), StandardCharsets.UTF_8);
+      Files.writeString(folder.resolve("report.json"), report.toJson(), StandardCharsets.UTF_8);
+      Files.writeString(folder.resolve("report.ags"), report.toAgs4(), StandardCharsets.UTF_8);
+      List<Path> charts = PlotGallery.write(test, name, folder);
+      out.println(
+          "Wrote report.csv, report.json, report.ags and "
+              + charts.size()
+              + " charts (PNG) to "
+              + folder.toAbsolutePath());
+    } catch (IOException | java.io.UncheckedIOException e) {
+      err.println("Cannot write the results to " + folder.toAbsolutePath() + ": " + e);
+      return 3;
+    }
+    return 0;
   }
 
   /**
@@ -120,65 +163,6 @@ public final class Demo {
               layer.timeFactorAt(seconds),
               100 * layer.degreeAt(seconds),
               1000 * layer.settlementAt(seconds)));
-    }
-    out.println();
-    printMethods(out, DemoTestGenerator.generate());
-  }
-
-  /** The per-increment methods, in the order of the table's columns. */
-  static final List<BiFunction<SettlementCurve, Double, CvEstimate>> METHODS =
-      List.of(
-          LogTimeMethod::fit,
-          RootTimeMethod::fit,
-          FullCurveMethod::fit,
-          InflectionPointMethod::fit,
-          RectangularHyperbolaMethod::fit,
-          EarlySlopeMethod::fit,
-          AsaokaMethod::fit);
-
-  /**
-   * Prints c_v of every increment of a test by every method, in m^2/yr, with the drainage path from
-   * the mean height of the increment (double drainage: half of it); "-" where a method finds no
-   * honest value, "*" after a value that carries warnings.
-   *
-   * @param out where to print
-   * @param test the test
-   */
-  static void printMethods(PrintStream out, OedometerTest test) {
-    double year = ClayLayer.SECONDS_PER_JULIAN_YEAR;
-    out.println("c_v (m^2/yr) of the INVENTED demo test (" + test.identifiers() + ")");
-    out.println(
-        "  drainage path: "
-            + test.drainage().name().toLowerCase(Locale.ROOT)
-            + " drainage, from the mean height of each increment; '-' no honest value, '*' value"
-            + " with warnings");
-    out.println(
-        "  incr  stress (kPa)   H_dr (mm)   log-time  root-time full-curve inflection  hyperbola"
-            + " early-slope   Asaoka");
-    for (int j = 0; j < test.increments().size(); j++) {
-      LoadIncrement increment = test.increments().get(j);
-      double path =
-          test.drainage()
-              .drainagePath((test.heightAtStartMetres(j) + test.heightAtEndMetres(j)) / 2);
-      StringBuilder row =
-          new StringBuilder(
-              format(
-                  "  %4d  %5.0f -> %5.0f  %8.3f ",
-                  j + 1,
-                  increment.stressBeforePascals() / 1000,
-                  increment.stressAfterPascals() / 1000,
-                  path * 1000));
-      for (BiFunction<SettlementCurve, Double, CvEstimate> method : METHODS) {
-        String cell;
-        try {
-          CvEstimate estimate = method.apply(increment.curve(), path);
-          cell = format("%.3g%s", estimate.cv() * year, estimate.warnings().isEmpty() ? "" : "*");
-        } catch (FitException e) {
-          cell = "-";
-        }
-        row.append(format(" %10s", cell));
-      }
-      out.println(row.toString().stripTrailing());
     }
   }
 
