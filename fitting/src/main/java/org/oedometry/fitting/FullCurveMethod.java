@@ -569,32 +569,13 @@ public final class FullCurveMethod {
       }
       a[r][m] = sum;
     }
-    // Gaussian elimination with partial pivoting on the small system.
-    for (int col = 0; col < m; col++) {
-      int pivot = col;
-      for (int r = col + 1; r < m; r++) {
-        if (Math.abs(a[r][col]) > Math.abs(a[pivot][col])) {
-          pivot = r;
-        }
-      }
-      double[] swap = a[col];
-      a[col] = a[pivot];
-      a[pivot] = swap;
-      if (!(Math.abs(a[col][col]) > 1e-300)) {
-        return null;
-      }
-      for (int r = 0; r < m; r++) {
-        if (r != col) {
-          double factor = a[r][col] / a[col][col];
-          for (int c = col; c <= m; c++) {
-            a[r][c] -= factor * a[col][c];
-          }
-        }
-      }
+    double[] x = SmallFits.solve(a);
+    if (x == null) {
+      return null;
     }
     double[] solution = new double[4];
     for (int r = 0; r < m; r++) {
-      solution[use[r]] = a[r][m] / a[r][r];
+      solution[use[r]] = x[r];
     }
     double rss = 0;
     for (int i = 0; i < n; i++) {

@@ -59,8 +59,12 @@ final class SmallFits {
     return solution;
   }
 
-  /** Solves the augmented system in place; null if singular. */
-  private static double[] solve(double[][] a) {
+  /**
+   * Solves a small augmented system [A | b] in place by Gaussian elimination with partial pivoting.
+   *
+   * @return the solution, or null if the system is singular
+   */
+  static double[] solve(double[][] a) {
     int m = a.length;
     for (int col = 0; col < m; col++) {
       int pivot = col;

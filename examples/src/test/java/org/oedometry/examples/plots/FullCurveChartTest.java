@@ -33,8 +33,8 @@ class FullCurveChartTest {
     CombinedDomainXYPlot plot =
         (CombinedDomainXYPlot) FullCurveChart.chart(DemoIncrement.CURVE, RESULT, "demo").getPlot();
     assertThat(plot.getSubplots()).hasSize(2);
-    XYPlot upper = (XYPlot) plot.getSubplots().get(0);
-    XYPlot lower = (XYPlot) plot.getSubplots().get(1);
+    XYPlot upper = plot.getSubplots().get(0);
+    XYPlot lower = plot.getSubplots().get(1);
     assertThat(upper.getRangeAxis().isInverted()).isTrue();
     assertThat(lower.getRangeAxis().getLabel()).contains("µm");
     XYSeriesCollection residuals = (XYSeriesCollection) lower.getDataset();
