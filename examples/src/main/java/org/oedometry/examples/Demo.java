@@ -103,7 +103,7 @@ public final class Demo {
       Files.writeString(folder.resolve("report.csv"), report.toCsv(), StandardCharsets.UTF_8);
       Files.writeString(folder.resolve("report.json"), report.toJson(), StandardCharsets.UTF_8);
       Files.writeString(folder.resolve("report.ags"), report.toAgs4(), StandardCharsets.UTF_8);
-      List<Path> charts = PlotGallery.write(test, name, folder);
+      List<Path> charts = PlotGallery.write(test, report, name, folder);
       out.println(
           "Wrote report.csv, report.json, report.ags and "
               + charts.size()

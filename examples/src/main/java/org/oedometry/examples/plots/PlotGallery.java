@@ -5,14 +5,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import java.util.function.BiFunction;
-import java.util.function.ToDoubleFunction;
 import org.oedometry.core.LoadIncrement;
 import org.oedometry.core.OedometerTest;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.core.compressibility.BilinearVolumeMethod;
 import org.oedometry.core.compressibility.CasagrandeMethod;
-import org.oedometry.core.compressibility.Compressibility;
 import org.oedometry.core.compressibility.CompressionCurve;
 import org.oedometry.core.compressibility.IncrementClass;
 import org.oedometry.core.compressibility.IncrementCompressibility;
@@ -23,14 +20,12 @@ import org.oedometry.core.compressibility.PermeabilityChangeIndex;
 import org.oedometry.core.compressibility.PreconsolidationEstimate;
 import org.oedometry.core.compressibility.WorkMethod;
 import org.oedometry.examples.demo.DemoTestGenerator;
-import org.oedometry.fitting.CvEstimate;
-import org.oedometry.fitting.FitException;
-import org.oedometry.fitting.FullCurveMethod;
+import org.oedometry.fitting.CvMethod;
 import org.oedometry.fitting.FullCurveResult;
-import org.oedometry.fitting.LogTimeMethod;
-import org.oedometry.fitting.LogTimeResult;
-import org.oedometry.fitting.RootTimeMethod;
-import org.oedometry.fitting.RootTimeResult;
+import org.oedometry.fitting.reduction.IncrementReport;
+import org.oedometry.fitting.reduction.MethodOutcome;
+import org.oedometry.fitting.reduction.TestReduction;
+import org.oedometry.fitting.reduction.TestReport;
 import org.oedometry.theory.ClayLayer;
 import org.oedometry.theory.Drainage;
 
@@ -90,11 +85,28 @@ public final class PlotGallery {
     if (test == null || name == null || folder == null) {
       throw new IllegalArgumentException("test, name and folder must not be null");
     }
+    return write(test, TestReduction.reduce(test), name, folder);
+  }
+
+  /**
+   * Writes every chart of a test from its reduction (the report's drainage paths and fits, so the
+   * charts show exactly what the report says).
+   *
+   * @param test the test; not null
+   * @param report its reduction; not null
+   * @param name what to call the test in chart titles; not null
+   * @param folder the output folder (created if needed); not null
+   * @return the files written
+   * @throws IllegalArgumentException if an argument is null
+   * @throws java.io.UncheckedIOException if a file cannot be written
+   */
+  public static List<Path> write(OedometerTest test, TestReport report, String name, Path folder) {
+    if (test == null || report == null || name == null || folder == null) {
+      throw new IllegalArgumentException("test, report, name and folder must not be null");
+    }
     List<Path> written = new ArrayList<>();
-    List<IncrementFits> fits = new ArrayList<>();
     for (int i = 0; i < test.increments().size(); i++) {
-      IncrementFits f = fit(test, i);
-      fits.add(f);
+      IncrementReport increment = report.increments().get(i);
       LoadIncrement inc = test.increments().get(i);
       SettlementCurve curve = inc.curve();
       String title =
@@ -106,45 +118,54 @@ public final class PlotGallery {
               inc.stressBeforePascals() / 1000,
               inc.stressAfterPascals() / 1000);
       String stem = String.format(Locale.ROOT, "increment-%02d-", i + 1);
-      f.logTime.ifPresent(
-          r ->
-              written.add(
-                  LogTimeChart.write(curve, r, title, folder.resolve(stem + "log-time.png"))));
-      f.rootTime.ifPresent(
-          r ->
-              written.add(
-                  RootTimeChart.write(curve, r, title, folder.resolve(stem + "root-time.png"))));
-      f.fullCurve.ifPresent(
-          r ->
-              written.add(
-                  FullCurveChart.write(curve, r, title, folder.resolve(stem + "full-curve.png"))));
+      increment
+          .logTime()
+          .ifPresent(
+              r ->
+                  written.add(
+                      LogTimeChart.write(curve, r, title, folder.resolve(stem + "log-time.png"))));
+      increment
+          .rootTime()
+          .ifPresent(
+              r ->
+                  written.add(
+                      RootTimeChart.write(
+                          curve, r, title, folder.resolve(stem + "root-time.png"))));
+      fullCurve(increment)
+          .ifPresent(
+              r ->
+                  written.add(
+                      FullCurveChart.write(
+                          curve, r, title, folder.resolve(stem + "full-curve.png"))));
     }
-    CompressionCurve curve = CompressionCurve.fromTest(test);
-    List<PreconsolidationEstimate> estimates = preconsolidation(curve);
+    CompressionCurve curve =
+        report.compressionCurve().value().orElseGet(() -> CompressionCurve.fromTest(test));
     written.add(
         CompressionChart.write(
             curve,
-            estimates,
+            report.preconsolidation(),
             name + ": void ratio against effective stress",
             folder.resolve("compression.png")));
-    double pressure =
-        estimates.stream()
-            .filter(e -> e.preconsolidationPressure().isPresent())
-            .findFirst()
-            .map(e -> e.preconsolidationPressure().getAsDouble())
-            .orElse(curve.points().get(0).effectiveStress());
-    List<IncrementCompressibility> compressibility = Compressibility.increments(curve, pressure);
     List<CvPoint> cvPoints = new ArrayList<>();
     List<IncrementPermeability> permeability = new ArrayList<>();
-    for (int i = 0; i < fits.size(); i++) {
-      IncrementCompressibility inc = compressibility.get(i);
-      IncrementFits f = fits.get(i);
-      for (Optional<? extends CvEstimate> estimate : List.of(f.logTime, f.rootTime, f.fullCurve)) {
-        estimate.ifPresent(e -> cvPoints.add(CvPoint.of(inc, e)));
+    List<IncrementPermeability> normallyConsolidated = new ArrayList<>();
+    for (IncrementReport increment : report.increments()) {
+      if (increment.compressibility().value().isEmpty()) {
+        continue;
       }
-      if (f.fullCurve.isPresent() && inc.mv() > 0) {
-        permeability.addAll(
-            Permeability.perIncrement(List.of(inc), new double[] {f.fullCurve.get().cv()}));
+      IncrementCompressibility compressibility = increment.compressibility().value().get();
+      for (MethodOutcome outcome : increment.methods()) {
+        outcome.estimate().ifPresent(e -> cvPoints.add(CvPoint.of(compressibility, e)));
+      }
+      if (increment.preferredCv().isPresent() && compressibility.mv() > 0) {
+        List<IncrementPermeability> k =
+            Permeability.perIncrement(
+                List.of(compressibility), new double[] {increment.preferredCv().getAsDouble()});
+        permeability.addAll(k);
+        if (increment.stressHistory().value().orElse(null)
+            == IncrementClass.NORMALLY_CONSOLIDATED) {
+          normallyConsolidated.addAll(k);
+        }
       }
     }
     if (!cvPoints.isEmpty()) {
@@ -155,21 +176,14 @@ public final class PlotGallery {
               folder.resolve("cv.png")));
     }
     if (!permeability.isEmpty()) {
-      List<IncrementPermeability> normallyConsolidated =
-          permeability.stream()
-              .filter(
-                  k ->
-                      compressibility.get(k.index()).stressHistory()
-                          == IncrementClass.NORMALLY_CONSOLIDATED)
-              .toList();
       written.add(
           PermeabilityChart.write(
               permeability,
               PermeabilityChangeIndex.fit(normallyConsolidated),
-              name + ": void ratio against hydraulic conductivity (full-curve c_v)",
+              name + ": void ratio against hydraulic conductivity (the report's c_v)",
               folder.resolve("permeability.png")));
     }
-    double layerCv = lastLoadingCv(test, fits).orElse(1.0 / ClayLayer.SECONDS_PER_JULIAN_YEAR);
+    double layerCv = lastLoadingCv(report).orElse(1.0 / ClayLayer.SECONDS_PER_JULIAN_YEAR);
     ClayLayer layer = ClayLayer.of(LAYER_THICKNESS, Drainage.DOUBLE, layerCv, LAYER_SETTLEMENT);
     written.add(
         ForecastChart.write(
@@ -190,53 +204,22 @@ public final class PlotGallery {
         BilinearVolumeMethod.onitsuka(curve));
   }
 
-  /** The three per-increment fits; a method that failed is empty. */
-  record IncrementFits(
-      Optional<LogTimeResult> logTime,
-      Optional<RootTimeResult> rootTime,
-      Optional<FullCurveResult> fullCurve) {}
-
-  static IncrementFits fit(OedometerTest test, int index) {
-    return new IncrementFits(
-        withRule(test, index, LogTimeMethod::fit, LogTimeResult::d50),
-        withRule(test, index, RootTimeMethod::fit, r -> 0.5 * (r.d0() + r.d100())),
-        withRule(test, index, FullCurveMethod::fit, r -> 0.5 * (r.d0() + r.d100())));
+  /** The full-curve fit of an increment, if the report has one. */
+  static Optional<FullCurveResult> fullCurve(IncrementReport increment) {
+    return increment
+        .estimate(CvMethod.FULL_CURVE)
+        .filter(FullCurveResult.class::isInstance)
+        .map(FullCurveResult.class::cast);
   }
 
-  /**
-   * A method's fit with the test's drainage path rule: a first fit with the start height, then, if
-   * the rule needs the height at 50 % consolidation, a second with the height at that fit's d50.
-   */
-  static <R> Optional<R> withRule(
-      OedometerTest test,
-      int index,
-      BiFunction<SettlementCurve, Double, R> method,
-      ToDoubleFunction<R> d50) {
-    SettlementCurve curve = test.increments().get(index).curve();
-    double start = test.heightAtStartMetres(index);
-    double end = test.heightAtEndMetres(index);
-    try {
-      R first = method.apply(curve, drainagePath(test, start, start, end));
-      if (!test.drainagePathRule().needsFittedCurve()) {
-        return Optional.of(first);
-      }
-      double half = start - d50.applyAsDouble(first);
-      return Optional.of(method.apply(curve, drainagePath(test, start, half, end)));
-    } catch (FitException | IllegalArgumentException e) {
-      return Optional.empty();
-    }
-  }
-
-  private static double drainagePath(OedometerTest test, double start, double half, double end) {
-    return test.drainagePathRule().drainagePath(test.drainage(), start, half, end);
-  }
-
-  /** Full-curve c_v of the last increment that loads, if it was fitted. */
-  private static Optional<Double> lastLoadingCv(OedometerTest test, List<IncrementFits> fits) {
-    for (int i = fits.size() - 1; i >= 0; i--) {
-      LoadIncrement inc = test.increments().get(i);
-      if (inc.stressAfterPascals() > inc.stressBeforePascals()) {
-        return fits.get(i).fullCurve.map(FullCurveResult::cv);
+  /** The report's c_v of the last increment that loads, if it has one. */
+  private static Optional<Double> lastLoadingCv(TestReport report) {
+    for (int i = report.increments().size() - 1; i >= 0; i--) {
+      IncrementReport increment = report.increments().get(i);
+      if (increment.stressAfterPascals() > increment.stressBeforePascals()) {
+        return increment.preferredCv().isPresent()
+            ? Optional.of(increment.preferredCv().getAsDouble())
+            : Optional.empty();
       }
     }
     return Optional.empty();
