@@ -34,7 +34,7 @@ import org.oedometry.theory.CurveParameters;
  *       exactly under d<sub>p</sub> &ge; 0, s &ge; 0 (a profile of the residual over c<sub>v
  *       </sub>). The lowest local minima of that profile (up to three, each within a factor of 4 of
  *       the lowest residual, and with a primary settlement), and the c<sub>v</sub> of the log-time
- *       and root-time constructions where they succeed and differ from those by more than 10 %
+ *       and root-time constructions where they succeed and lie more than half a profile step away
  *       (their linear parameters solved the same way), start Levenberg-Marquardt (commons-math3,
  *       analytic Jacobian from {@link ConsolidationCurveModel}, parameters d<sub>i</sub>,
  *       d<sub>p</sub>, ln c<sub>v</sub>, s, with d<sub>p</sub> &ge; 0 and s &ge; 0 in the direction
@@ -83,8 +83,12 @@ public final class FullCurveMethod {
   /** Readings used for the profile of start values, at most. */
   private static final int PROFILE_READINGS = 300;
 
-  /** Starts whose ln c_v differ by less than this (10 %) are one start: the later is skipped. */
-  private static final double SAME_START = 0.1;
+  /**
+   * Starts whose ln c_v differ by less than half a step of the profile (the profile's c_v grow by a
+   * factor of about 1.58 a step) are one start as far as the profile can tell: the later is
+   * skipped.
+   */
+  private static final double SAME_START = 0.25;
 
   /** A profile minimum whose residual exceeds the lowest by more than this is not a start. */
   private static final double START_RESIDUAL_FACTOR = 4.0;

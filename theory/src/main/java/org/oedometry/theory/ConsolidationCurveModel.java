@@ -137,10 +137,18 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
               "gradient array length (%d) must be >= %d", gradient.length, PARAMETER_COUNT));
     }
     final double t = timeFactor(seconds, parameters.cv());
-    final double degree = Terzaghi.averageDegree(t);
+    final double degree;
+    final double timeTimesRate;
+    if (t == 0.0) {
+      degree = 0.0;
+      timeTimesRate = 0.0;
+    } else {
+      final double[] rate = new double[1];
+      degree = Terzaghi.averageDegreeAndRate(t, rate);
+      timeTimesRate = t * rate[0];
+    }
     final double ratio = t / secondaryOnset;
     final double secondaryShape = secondaryShape(t);
-    final double timeTimesRate = t == 0.0 ? 0.0 : t * Terzaghi.averageDegreeDerivative(t);
     gradient[0] = 1.0;
     gradient[1] = degree;
     gradient[2] =

@@ -261,4 +261,19 @@ class TerzaghiTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("time factor T (NaN) must be >= 0");
   }
+
+  @Test
+  @DisplayName("U and dU/dT together: U bit for bit, dU/dT to 1e-15 relative, for T in [1e-12, 20]")
+  void degreeAndRateTogether() {
+    double[] rate = new double[1];
+    for (double e = -12; e <= Math.log10(20); e += 0.01) {
+      double t = Math.pow(10, e);
+      assertThat(Terzaghi.averageDegreeAndRate(t, rate)).isEqualTo(Terzaghi.averageDegree(t));
+      assertThat(rate[0] / Terzaghi.averageDegreeDerivative(t) - 1).isCloseTo(0, within(1e-15));
+    }
+    assertThat(Terzaghi.averageDegreeAndRate(Double.POSITIVE_INFINITY, rate)).isEqualTo(1.0);
+    assertThat(rate[0]).isZero();
+    assertThatThrownBy(() -> Terzaghi.averageDegreeAndRate(0, rate))
+        .isInstanceOf(IllegalArgumentException.class);
+  }
 }
