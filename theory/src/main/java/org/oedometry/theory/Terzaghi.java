@@ -95,6 +95,15 @@ public final class Terzaghi {
   /** A Fourier term below this fraction of the partial sum ends the series. */
   private static final double SERIES_TOLERANCE = 0x1.0p-56;
 
+  /**
+   * Below this q = exp(-&pi;<sup>2</sup>T/4) (T &gt; 1.97) every Fourier term after the first is
+   * below {@link #SERIES_TOLERANCE} of it (q<sup>8</sup> &lt; 2<sup>-56</sup>), so the series is
+   * its first term (bit for bit the same as summing the series for U, 1 - U and dU/dT; within the
+   * tolerance for u/u<sub>0</sub>); computing q<sup>8</sup> would otherwise run into subnormal
+   * numbers for T above about 35, which are very slow on common processors.
+   */
+  private static final double SINGLE_TERM_LIMIT = 0x1.0p-7;
+
   /** erfc(x) &lt; 2.2e-17 above this argument: image terms beyond it are dropped. */
   private static final double ERFC_NEGLIGIBLE_ARGUMENT = 6.0;
 
@@ -187,6 +196,9 @@ public final class Terzaghi {
     }
     // 2 sum q^((2m+1)^2), terms from one exponential by recurrence.
     final double q = Math.exp(-PI_SQUARED_OVER_4 * timeFactor);
+    if (q < SINGLE_TERM_LIMIT) {
+      return 2.0 * q;
+    }
     final double q8 = q * q * q * q * q * q * q * q;
     double power = q; // q^((2m+1)^2)
     double step = q8; // q^(8(m+1))
@@ -294,6 +306,10 @@ public final class Terzaghi {
       return 1.0;
     }
     final double q = Math.exp(-PI_SQUARED_OVER_4 * timeFactor);
+    if (q < SINGLE_TERM_LIMIT) {
+      rate[0] = 2.0 * q;
+      return Math.min(1.0 - EIGHT_OVER_PI_SQUARED * q, LARGEST_BELOW_ONE);
+    }
     final double q8 = q * q * q * q * q * q * q * q;
     double power = q;
     double step = q8;
@@ -320,6 +336,9 @@ public final class Terzaghi {
       return 0.0;
     }
     final double q = Math.exp(-PI_SQUARED_OVER_4 * timeFactor);
+    if (q < SINGLE_TERM_LIMIT) {
+      return EIGHT_OVER_PI_SQUARED * q;
+    }
     final double q8 = q * q * q * q * q * q * q * q;
     double power = q; // q^((2m+1)^2)
     double step = q8; // q^(8(m+1))
@@ -391,8 +410,11 @@ public final class Terzaghi {
   /** Fourier form of u/u0 for 0 &lt; z &le; 1 and T_s &le; T &lt; infinity. */
   private static double porePressureFourier(double z, double timeFactor) {
     final double q = Math.exp(-PI_SQUARED_OVER_4 * timeFactor);
-    final double q8 = q * q * q * q * q * q * q * q;
     final double halfPiZ = Math.PI * z / 2.0;
+    if (q < SINGLE_TERM_LIMIT) {
+      return 2.0 * TWO_OVER_PI * (Math.sin(halfPiZ) * q);
+    }
+    final double q8 = q * q * q * q * q * q * q * q;
     double power = q;
     double step = q8;
     double sum = 0.0;

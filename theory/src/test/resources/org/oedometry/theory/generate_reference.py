@@ -334,7 +334,7 @@ def log_grid(start_exp, per_decade, stop):
 
 
 def average_degree_table():
-    ts = set(log_grid(-12, 40, 20))
+    ts = set(log_grid(-12, 40, 100))
     ts.update(float(mpf(x)) for x in ("0.01", "0.1", "0.5", "1", "2"))
     for u in ("0.1", "0.2", "0.3", "0.4", "0.5", "0.6", "0.7", "0.8", "0.9", "0.95", "0.99"):
         ts.add(float(time_factor_for(mpf(u))))
@@ -345,7 +345,7 @@ def average_degree_table():
             " dU/dT = sum_m 2 exp(-M^2 T);",
             "short time: U = 2 sqrt(T/pi) + 4 sqrt(T) sum_{n>=1} (-1)^n ierfc(n/sqrt(T)),"
             " dU/dT = (1 + 2 sum_{n>=1} (-1)^n exp(-n^2/T)) / sqrt(pi T).",
-            "Grid: 40 points per decade 1e-12..20, the T values 0.01, 0.1, 0.5, 1, 2,"
+            "Grid: 40 points per decade 1e-12..100, the T values 0.01, 0.1, 0.5, 1, 2,"
             " and T at U = 10 %..90 %, 95 %, 99 %.",
         ],
     )
@@ -382,7 +382,7 @@ def time_factor_table():
 
 def pore_pressure_table():
     zs = ("0", "0.05", "0.1", "0.25", "0.5", "0.75", "1", "1.25", "1.5", "1.9", "2")
-    points = {(float(mpf(z)), t) for z in zs for t in log_grid(-6, 10, 20)}
+    points = {(float(mpf(z)), t) for z in zs for t in log_grid(-6, 10, 100)}
     points.update((float(mpf(z)), float(mpf(t)))
                   for z, t in (("1", "0.2"), ("1", "0.5"), ("1", "1"), ("0.5", "0.2")))
     lines = header(
@@ -394,7 +394,7 @@ def pore_pressure_table():
             "Z = 0 and Z = 2 are drained faces: u/u0 = 0 exactly (the series agree to"
             " rounding).",
             "Grid: Z in {0, 0.05, 0.1, 0.25, 0.5, 0.75, 1, 1.25, 1.5, 1.9, 2} x T 10 per decade"
-            " 1e-6..20,",
+            " 1e-6..100,",
             "plus (Z, T) = (1, 0.2), (1, 0.5), (1, 1), (0.5, 0.2).",
         ],
     )
