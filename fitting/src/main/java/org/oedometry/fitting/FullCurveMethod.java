@@ -4,9 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.LUDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.internal.Checks;
 import org.oedometry.fitting.internal.WeightedLeastSquares;
@@ -29,17 +27,29 @@ import org.oedometry.theory.CurveParameters;
  *       first) is fitted on the magnitude and reported in the input's sign.
  *   <li>Weights ({@link FullCurveOptions.ReadingWeights}): by default each reading weighs the span
  *       of log t it represents, normalised to a mean of 1.
+ *   <li>Grouping (data loggers): above 400 readings the search of the next step runs on 100 equal
+ *       bins of log t, each bin's readings replaced by their weighted mean time and settlement with
+ *       the bin's total weight (see {@code ReadingGroups}: the grouped objective differs from the
+ *       full one by a term that hardly depends on the parameters). Up to the limit every reading is
+ *       its own group.
  *   <li>Starts: for 31 trial values of c<sub>v</sub>, log-spaced so that T at the last reading runs
  *       from 0.02 to 20 000, the model is linear in (d<sub>i</sub>, d<sub>p</sub>, s) and is solved
  *       exactly under d<sub>p</sub> &ge; 0, s &ge; 0 (a profile of the residual over c<sub>v
  *       </sub>). The lowest local minima of that profile (up to three, each within a factor of 4 of
  *       the lowest residual, and with a primary settlement), and the c<sub>v</sub> of the log-time
- *       and root-time constructions where they succeed and lie more than half a profile step away
- *       (their linear parameters solved the same way), start Levenberg-Marquardt (commons-math3,
- *       analytic Jacobian from {@link ConsolidationCurveModel}, parameters d<sub>i</sub>,
- *       d<sub>p</sub>, ln c<sub>v</sub>, s, with d<sub>p</sub> &ge; 0 and s &ge; 0 in the direction
- *       of movement: a large primary term cancelled by a negative secondary term cannot mimic a
- *       slow curve). The best fit is kept; the result says how many starts reached it.
+ *       and root-time constructions (on the groups) where they succeed and lie more than half a
+ *       profile step away (their linear parameters solved the same way), start Levenberg-Marquardt
+ *       (commons-math3, analytic Jacobian from {@link ConsolidationCurveModel}, parameters d<sub>i
+ *       </sub>, d<sub>p</sub>, ln c<sub>v</sub>, s, with d<sub>p</sub> &ge; 0 and s &ge; 0 in the
+ *       direction of movement: a large primary term cancelled by a negative secondary term cannot
+ *       mimic a slow curve). The best fit is kept; the result says how many starts reached it.
+ *   <li>Every reading: when the readings were grouped, the best grouped fit is finished on every
+ *       reading by Gauss-Newton steps, one pass over the readings each, until the optimum of the
+ *       weighted least squares over all readings is nearer than 0.01 standard errors (Levenberg-
+ *       Marquardt takes over if a step fails); typically one or two passes. The reported fit is
+ *       therefore the fit to every reading, to well within its statistical uncertainty (tested
+ *       against Levenberg-Marquardt on all readings). Iterations and evaluations count those of the
+ *       best start plus these steps and passes.
  *   <li>Interval: the standard error of ln c<sub>v</sub> from the covariance of the parameters,
  *       with the readings' noise variance estimated from the unweighted residuals (&Sigma;r<sup>2
  *       </sup>/(n - p)), by the sandwich A<sup>-1</sup>BA<sup>-1</sup> (A = J<sup>T</sup>WJ, B =
@@ -80,8 +90,17 @@ public final class FullCurveMethod {
 
   private static final int MAX_STARTS = 3;
 
-  /** Readings used for the profile of start values, at most. */
-  private static final int PROFILE_READINGS = 300;
+  /** Above this many readings (after t = 0) the search runs on log-time groups of readings. */
+  static final int GROUPING_LIMIT = 400;
+
+  /** Number of equal log-time bins the readings are grouped into above the limit. */
+  static final int GROUPS = 100;
+
+  /**
+   * The fit on every reading is finished when the optimum is nearer than this many standard errors
+   * (see {@link WeightedLeastSquares#refineStreamed}).
+   */
+  private static final double REFINEMENT_STANDARD_ERRORS = 0.01;
 
   /**
    * Starts whose ln c_v differ by less than half a step of the profile (the profile's c_v grow by a
@@ -144,8 +163,12 @@ public final class FullCurveMethod {
     }
     final double[] t = Arrays.copyOfRange(allTimes, first, allTimes.length);
     final double[] raw = Arrays.copyOfRange(allSettlements, first, allSettlements.length);
-    double lowest = Arrays.stream(raw).min().orElseThrow();
-    double highest = Arrays.stream(raw).max().orElseThrow();
+    double lowest = raw[0];
+    double highest = raw[0];
+    for (double value : raw) {
+      lowest = Math.min(lowest, value);
+      highest = Math.max(highest, value);
+    }
     if (!(highest > lowest)) {
       throw new FitException(
           "the readings do not move (every settlement is "
@@ -165,16 +188,13 @@ public final class FullCurveMethod {
     final double lowestLogCv = Math.log(LOWEST_END_FACTOR * pathSquared / lastTime);
     final double highestLogCv = Math.log(HIGHEST_END_FACTOR * pathSquared / lastTime);
 
-    // 1. Profile of the residual over trial c_v, linear parameters solved exactly, on at most
-    // PROFILE_READINGS readings spread evenly over log t (start values only: the fit uses all).
-    int[] kept = spreadOverLogTime(t, PROFILE_READINGS);
-    double[] profileTimes = new double[kept.length];
-    double[] profileY = new double[kept.length];
-    for (int k = 0; k < kept.length; k++) {
-      profileTimes[k] = t[kept[k]];
-      profileY[k] = y[kept[k]];
-    }
-    double[] profileWeights = kept.length == n ? w : weights(profileTimes, options.weights());
+    // 1. Many readings are grouped into log-time bins for the search (start values, profile and
+    // the multi-start Levenberg-Marquardt); the fit is then finished on every reading.
+    final ReadingGroups groups = ReadingGroups.of(t, y, w, GROUPING_LIMIT, GROUPS);
+    final double[] profileTimes = groups.times();
+    final double[] profileY = groups.settlements();
+    final double[] profileWeights = groups.weights();
+    // Profile of the residual over trial c_v, linear parameters solved exactly.
     double[] profileLogCv = new double[PROFILE_POINTS];
     double[] profileRss = new double[PROFILE_POINTS];
     double[][] profileLinear = new double[PROFILE_POINTS][];
@@ -207,15 +227,24 @@ public final class FullCurveMethod {
     // 2. Levenberg-Marquardt from each start; keep the best.
     WeightedLeastSquares solver =
         WeightedLeastSquares.withDefaults().withMaxIterations(options.maxIterations());
-    WeightedLeastSquares.Model leastSquaresModel =
+    WeightedLeastSquares.Model groupModel =
         (p, values, jacobian) -> {
           CurveParameters parameters =
               new CurveParameters(p[0], p[1], Math.exp(p[2]), parameterCount == 4 ? p[3] : 0.0);
           double[] full = new double[4];
           for (int i = 0; i < values.length; i++) {
-            values[i] = model.settlementAndGradient(t[i], parameters, full);
+            values[i] = model.settlementAndGradient(profileTimes[i], parameters, full);
             System.arraycopy(full, 0, jacobian[i], 0, parameterCount);
           }
+        };
+    ParameterValidator bounds =
+        point -> {
+          point.setEntry(1, Math.max(0.0, point.getEntry(1)));
+          point.setEntry(2, Math.min(highestLogCv, Math.max(lowestLogCv, point.getEntry(2))));
+          if (parameterCount == 4) {
+            point.setEntry(3, Math.max(0.0, point.getEntry(3)));
+          }
+          return point;
         };
     WeightedLeastSquares.Solution best = null;
     List<Double> reachedLogCv = new ArrayList<>();
@@ -225,7 +254,8 @@ public final class FullCurveMethod {
       starts.add(startVector(profileLinear[index], profileLogCv[index], parameterCount));
     }
     // The log-time and root-time constructions, where they succeed, give further starts.
-    for (double constructionCv : constructionCvs(curve, drainagePathMetres)) {
+    for (double constructionCv :
+        constructionCvs(groups.asCurve(curve, first, sign), drainagePathMetres)) {
       double[] linear =
           linearFit(
               model,
@@ -243,20 +273,7 @@ public final class FullCurveMethod {
     for (double[] start : starts) {
       try {
         WeightedLeastSquares.Solution solution =
-            solver.solve(
-                leastSquaresModel,
-                y,
-                w,
-                start,
-                point -> {
-                  point.setEntry(1, Math.max(0.0, point.getEntry(1)));
-                  point.setEntry(
-                      2, Math.min(highestLogCv, Math.max(lowestLogCv, point.getEntry(2))));
-                  if (parameterCount == 4) {
-                    point.setEntry(3, Math.max(0.0, point.getEntry(3)));
-                  }
-                  return point;
-                });
+            solver.solve(groupModel, profileY, profileWeights, start, bounds);
         reachedLogCv.add(solution.parameters()[2]);
         if (best == null
             || solution.weightedResidualSumOfSquares() < best.weightedResidualSumOfSquares()) {
@@ -270,6 +287,35 @@ public final class FullCurveMethod {
       throw new FitException(
           "the least-squares fit failed from every start: " + lastFailure.getMessage(),
           lastFailure);
+    }
+    int iterations = best.iterations();
+    int evaluations = best.evaluations();
+    final double searchLogCv = best.parameters()[2];
+    if (groups.grouped()) {
+      // Finish on every reading from the best grouped fit.
+      final CurveParameters[] current = new CurveParameters[1];
+      final double[][] currentFor = new double[1][];
+      final double[] scratch = new double[4];
+      WeightedLeastSquares.PointModel readingModel =
+          (index, q, gradient) -> {
+            if (q != currentFor[0]) {
+              // One parameter vector per pass over the readings: build its values once.
+              currentFor[0] = q;
+              current[0] =
+                  new CurveParameters(q[0], q[1], Math.exp(q[2]), parameterCount == 4 ? q[3] : 0.0);
+            }
+            if (parameterCount == 4) {
+              return model.settlementAndGradient(t[index], current[0], gradient);
+            }
+            double value = model.settlementAndGradient(t[index], current[0], scratch);
+            System.arraycopy(scratch, 0, gradient, 0, parameterCount);
+            return value;
+          };
+      best =
+          solver.refineStreamed(
+              readingModel, y, w, best.parameters(), bounds, REFINEMENT_STANDARD_ERRORS);
+      iterations += best.iterations();
+      evaluations += best.evaluations();
     }
     final double[] p = best.parameters();
     final double logCv = p[2];
@@ -289,7 +335,7 @@ public final class FullCurveMethod {
     final double secondary = parameterCount == 4 ? p[3] : 0.0;
     int atBest = 0;
     for (double reached : reachedLogCv) {
-      if (Math.abs(reached - logCv) < 1e-3) {
+      if (Math.abs(reached - searchLogCv) < 1e-3) {
         atBest++;
       }
     }
@@ -304,13 +350,13 @@ public final class FullCurveMethod {
         lagProduct += residuals[i] * residuals[i - 1];
       }
     }
-    double noiseVariance = sumSquares / (n - parameterCount);
     double autocorrelation = sumSquares > 0 ? lagProduct / sumSquares : 0.0;
     double clipped = Math.min(0.95, Math.max(0.0, autocorrelation));
     double widening = (1 + clipped) / (1 - clipped);
     CurveParameters fitted = new CurveParameters(p[0], p[1], cv, secondary);
-    double[][] covariance =
-        covariance(model, fitted, t, w, parameterCount, options.weights(), noiseVariance);
+    // The sandwich A^-1 B A^-1 with the noise variance of the unweighted residuals (A^-1 alone,
+    // scaled the same way, for unit weights).
+    double[][] covariance = best.equalNoiseCovariance();
     double[] errors = new double[4];
     for (int j = 0; j < parameterCount; j++) {
       errors[j] = Math.sqrt(Math.max(0.0, covariance[j][j] * widening));
@@ -327,7 +373,11 @@ public final class FullCurveMethod {
     }
 
     // 4. Statistics, warnings and the plotted curve.
-    double mean = Arrays.stream(y).average().orElse(0);
+    double mean = 0;
+    for (double value : y) {
+      mean += value;
+    }
+    mean /= n;
     double total = 0;
     for (double value : y) {
       total += (value - mean) * (value - mean);
@@ -399,10 +449,7 @@ public final class FullCurveMethod {
       double logTime = logFirst + (logLast - logFirst) * k / (CURVE_POINTS - 1);
       plotted.add(new PlotPoint(logTime, sign * model.settlement(Math.pow(10, logTime), fitted)));
     }
-    List<Double> residualList = new ArrayList<>(n);
-    for (double r : residuals) {
-      residualList.add(sign * r);
-    }
+    List<Double> residualList = FrozenDoubles.scaled(residuals, sign);
     CurveParameters reported = new CurveParameters(sign * p[0], sign * p[1], cv, sign * secondary);
     return new FullCurveResult(
         cv,
@@ -417,8 +464,8 @@ public final class FullCurveMethod {
         residualList,
         Math.sqrt(sumSquares / n),
         rSquared,
-        best.iterations(),
-        best.evaluations(),
+        iterations,
+        evaluations,
         starts.size(),
         atBest,
         drainagePathMetres,
@@ -478,36 +525,6 @@ public final class FullCurveMethod {
       w[i] = Math.max(w[i] / mean, 1e-6);
     }
     return w;
-  }
-
-  /**
-   * Indices of at most about {@code limit} readings spread evenly over log t: the first reading of
-   * each of {@code limit} equal bins of log t (all readings when there are no more than the limit).
-   */
-  static int[] spreadOverLogTime(double[] t, int limit) {
-    int n = t.length;
-    if (n <= limit) {
-      int[] all = new int[n];
-      for (int i = 0; i < n; i++) {
-        all[i] = i;
-      }
-      return all;
-    }
-    double low = Math.log10(t[0]);
-    double span = Math.log10(t[n - 1]) - low;
-    int[] kept = new int[limit + 1];
-    int count = 0;
-    int lastBin = -1;
-    for (int i = 0; i < n; i++) {
-      int bin = (int) Math.min(limit - 1, Math.floor((Math.log10(t[i]) - low) / span * limit));
-      if (bin != lastBin || i == n - 1) {
-        if (count < kept.length) {
-          kept[count++] = i;
-        }
-        lastBin = bin;
-      }
-    }
-    return Arrays.copyOf(kept, count);
   }
 
   /**
@@ -617,45 +634,6 @@ public final class FullCurveMethod {
       minima.removeIf(k -> profile[k] > START_RESIDUAL_FACTOR * lowest);
     }
     return List.copyOf(minima.subList(0, Math.min(count, minima.size())));
-  }
-
-  /** Sandwich (or plain) covariance of the fitted parameters, scaled by the noise variance. */
-  private static double[][] covariance(
-      ConsolidationCurveModel model,
-      CurveParameters fitted,
-      double[] t,
-      double[] w,
-      int p,
-      FullCurveOptions.ReadingWeights kind,
-      double noiseVariance) {
-    double[][] a = new double[p][p];
-    double[][] b = new double[p][p];
-    double[] g = new double[4];
-    for (int i = 0; i < t.length; i++) {
-      model.settlementAndGradient(t[i], fitted, g);
-      for (int j = 0; j < p; j++) {
-        for (int k = 0; k < p; k++) {
-          double product = g[j] * g[k];
-          a[j][k] += w[i] * product;
-          b[j][k] += w[i] * w[i] * product;
-        }
-      }
-    }
-    RealMatrix inverse;
-    try {
-      inverse =
-          new LUDecomposition(new Array2DRowRealMatrix(a, false), 1e-300).getSolver().getInverse();
-    } catch (org.apache.commons.math3.linear.SingularMatrixException e) {
-      throw new FitException(
-          "the parameters cannot all be determined from these readings (singular normal matrix)",
-          e);
-    }
-    RealMatrix result =
-        kind == FullCurveOptions.ReadingWeights.UNIT
-            ? inverse
-            : inverse.multiply(new Array2DRowRealMatrix(b, false)).multiply(inverse);
-    double[][] out = result.scalarMultiply(noiseVariance).getData();
-    return out;
   }
 
   /** z statistic of the Wald-Wolfowitz runs test on the residuals' signs (0 if too few). */

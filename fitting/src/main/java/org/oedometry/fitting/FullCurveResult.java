@@ -27,8 +27,10 @@ import org.oedometry.theory.CurveParameters;
  * @param residuals reading minus fitted settlement for each reading used (t &gt; 0), m
  * @param rootMeanSquareResidual &radic;(&Sigma;r<sup>2</sup>/n) of the residuals, m
  * @param rSquared coefficient of determination of the unweighted residuals
- * @param iterations Levenberg-Marquardt iterations of the best start
- * @param evaluations model evaluations of the best start
+ * @param iterations Levenberg-Marquardt iterations of the best start (plus the refinement steps on
+ *     every reading when the readings were grouped; see {@link FullCurveMethod})
+ * @param evaluations model evaluations of the best start (plus the passes over every reading when
+ *     grouped)
  * @param starts number of starts tried
  * @param startsAtBest number of starts that reached the best fit (c<sub>v</sub> within 0.1 %)
  * @param drainagePath the drainage path H<sub>dr</sub> used, m
@@ -104,7 +106,7 @@ public record FullCurveResult(
       throw new IllegalArgumentException("parameters must not be null");
     }
     standardErrors = List.copyOf(standardErrors);
-    residuals = List.copyOf(residuals);
+    residuals = FrozenDoubles.copyOf(residuals);
     fittedCurve = List.copyOf(fittedCurve);
     warnings = List.copyOf(warnings);
   }

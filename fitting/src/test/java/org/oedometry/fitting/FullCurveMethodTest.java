@@ -8,6 +8,7 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.internal.WeightedLeastSquares;
 import org.oedometry.theory.ConsolidationCurveModel;
 import org.oedometry.theory.CurveParameters;
 
@@ -107,6 +108,69 @@ class FullCurveMethodTest {
       }
     }
     assertThat(covered).as("repetitions covering the true c_v").isGreaterThanOrEqualTo(180);
+  }
+
+  @Test
+  @DisplayName(
+      "Many readings (grouped search, then refinement on every reading): c_v, d_i, d_p and s"
+          + " within 0.01 standard errors of Levenberg-Marquardt over all 8,640 readings, and the"
+          + " standard error of ln c_v between 0.99 and 1.1 times the reference sandwich error [plain Commons Math Levenberg-Marquardt on"
+          + " every reading as reference]")
+  void groupedFitMatchesFitOnEveryReading() {
+    SplittableRandom random = new SplittableRandom(77);
+    for (double cvPerYear : new double[] {0.3, 1.5, 6}) {
+      CurveParameters truth = CurveParameters.of(0.015e-3, 0.500e-3, cvPerYear / YEAR, 0.020e-3);
+      SettlementCurve curve = curve(loggerSchedule(), truth, 1e-6, random);
+      FullCurveResult fit = FullCurveMethod.fit(curve, DRAINAGE_PATH);
+      double[] t = curve.elapsedSeconds();
+      double[] y = curve.settlementMetres();
+      double[] w = FullCurveMethod.weights(t, FullCurveOptions.ReadingWeights.LOG_TIME_BALANCE);
+      ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
+      WeightedLeastSquares.Solution reference =
+          WeightedLeastSquares.withDefaults()
+              .solve(
+                  ((WeightedLeastSquares.PointModel)
+                          (i, q, g) ->
+                              model.settlementAndGradient(
+                                  t[i], CurveParameters.of(q[0], q[1], Math.exp(q[2]), q[3]), g))
+                      .asModel(),
+                  y,
+                  w,
+                  new double[] {0, 0.4e-3, Math.log(truth.cv()), 0.01e-3},
+                  null);
+      double[] q = reference.parameters();
+      double[] se = reference.standardErrors();
+      double[] fitted = {fit.d0(), fit.d100() - fit.d0(), Math.log(fit.cv()), fit.secondarySlope()};
+      for (int j = 0; j < 4; j++) {
+        assertThat(Math.abs(fitted[j] - q[j]))
+            .as("parameter %d at %s m^2/yr, against %s standard errors", j, cvPerYear, se[j])
+            .isLessThanOrEqualTo(0.01 * se[j] + 1e-12 * Math.abs(q[j]));
+      }
+      // The result's error of ln c_v is the sandwich form, widened by AR(1) for correlated
+      // residuals (these are independent, so by at most a few per cent).
+      double sandwich = Math.sqrt(reference.equalNoiseCovariance()[2][2]);
+      double resultError =
+          Math.log(fit.cvHigh() / fit.cv())
+              / new org.apache.commons.math3.distribution.TDistribution(null, t.length - 4)
+                  .inverseCumulativeProbability(0.975);
+      assertThat(resultError).isBetween(0.99 * sandwich, 1.1 * sandwich);
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Noise-free data-logger schedule (8,640 readings, grouped search): c_v within 0.1 %, d_i"
+          + " within 0.1 % of d_p, s within 1 %")
+  void recoversExactParametersFromManyReadings() {
+    for (double cvPerYear : new double[] {0.3, 1.5, 6}) {
+      CurveParameters truth = CurveParameters.of(0.015e-3, 0.500e-3, cvPerYear / YEAR, 0.020e-3);
+      FullCurveResult r =
+          FullCurveMethod.fit(curve(loggerSchedule(), truth, 0, null), DRAINAGE_PATH);
+      assertThat(r.cv() / truth.cv() - 1).as("c_v at %s", cvPerYear).isCloseTo(0, within(0.001));
+      assertThat(r.d0() - truth.initialSettlement()).isCloseTo(0, within(0.001 * 0.5e-3));
+      assertThat(r.secondarySlope() / truth.secondarySlope() - 1).isCloseTo(0, within(0.01));
+      assertThat(r.residuals()).hasSize(8640);
+    }
   }
 
   @Test

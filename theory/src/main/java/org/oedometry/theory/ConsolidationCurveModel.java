@@ -143,9 +143,9 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
       degree = 0.0;
       timeTimesRate = 0.0;
     } else {
-      final double[] rate = new double[1];
-      degree = Terzaghi.averageDegreeAndRate(t, rate);
-      timeTimesRate = t * rate[0];
+      // The gradient array holds dU/dT for a moment (its first entry is set below).
+      degree = Terzaghi.averageDegreeAndRate(t, gradient);
+      timeTimesRate = t * gradient[0];
     }
     final double ratio = t / secondaryOnset;
     final double secondaryShape = secondaryShape(t);
@@ -160,9 +160,14 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
         + parameters.secondarySlope() * secondaryShape;
   }
 
-  /** log10(1 + T / T_s), the secondary term per unit slope. */
+  /**
+   * log10(1 + T / T_s), the secondary term per unit slope: log1p below a ratio of 1/2, where it
+   * matters; above, log(1 + x), within 3 ulp (the rounding of 1 + x costs at most 2<sup>-53</sup> /
+   * ln 1.5 relative) and faster on common Java runtimes.
+   */
   private double secondaryShape(double timeFactor) {
-    return Math.log1p(timeFactor / secondaryOnset) / LN_10;
+    final double ratio = timeFactor / secondaryOnset;
+    return (ratio < 0.5 ? Math.log1p(ratio) : Math.log(1.0 + ratio)) / LN_10;
   }
 
   private static void requireTime(double seconds) {

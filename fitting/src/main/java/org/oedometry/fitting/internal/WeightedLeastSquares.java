@@ -15,7 +15,9 @@ import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunctio
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.EigenDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.linear.SingularMatrixException;
 import org.apache.commons.math3.util.Pair;
 import org.oedometry.fitting.FitException;
@@ -35,6 +37,17 @@ import org.oedometry.fitting.FitException;
  * residual variance. Commons Math's {@code Optimum.getSigma} is &radic;C<sub>jj</sub> only: it is
  * not the standard error for unit weights. Checked against the certified values of the NIST StRD
  * nonlinear regression datasets (see the tests).
+ *
+ * <p>Two covariances are given. {@link Solution#covariance()} treats the weights as inverse
+ * relative variances: s<sup>2</sup> (J<sup>T</sup>WJ)<sup>-1</sup>. {@link
+ * Solution#equalNoiseCovariance()} treats them as design weights on observations of equal noise
+ * variance &sigma;<sup>2</sup>, estimated by &Sigma; r<sup>2</sup> / (n - p) from the unweighted
+ * residuals: &sigma;<sup>2</sup> A<sup>-1</sup>BA<sup>-1</sup> with A = J<sup>T</sup>WJ and B =
+ * J<sup>T</sup>W<sup>2</sup>J (the sandwich form; the two agree for unit weights).
+ *
+ * <p>For many observations and few parameters, {@link #solveStreamed} passes each evaluation to the
+ * optimiser compressed to p + 1 rows (see there), so that nothing of size n &times; p is built or
+ * decomposed.
  *
  * <p>Stateless: one instance may be shared between threads.
  */
@@ -90,6 +103,8 @@ public final class WeightedLeastSquares {
    * @param standardErrors standard errors of the parameters, scaled by the residual variance
    * @param covariance scaled covariance s<sup>2</sup> (J<sup>T</sup>WJ)<sup>-1</sup> of the
    *     parameters
+   * @param equalNoiseCovariance covariance for design weights on observations of equal noise:
+   *     &sigma;<sup>2</sup> A<sup>-1</sup>BA<sup>-1</sup> (see the class description)
    * @param weightedResidualSumOfSquares &Sigma; w r<sup>2</sup> at the optimum
    * @param residuals y<sub>i</sub> - f<sub>i</sub>(p), unweighted
    * @param iterations Levenberg-Marquardt iterations
@@ -99,6 +114,7 @@ public final class WeightedLeastSquares {
       double[] parameters,
       double[] standardErrors,
       double[][] covariance,
+      double[][] equalNoiseCovariance,
       double weightedResidualSumOfSquares,
       double[] residuals,
       int iterations,
@@ -110,6 +126,7 @@ public final class WeightedLeastSquares {
      * @param parameters the parameters at the optimum
      * @param standardErrors standard errors
      * @param covariance scaled covariance
+     * @param equalNoiseCovariance covariance for design weights on observations of equal noise
      * @param weightedResidualSumOfSquares weighted residual sum of squares
      * @param residuals unweighted residuals
      * @param iterations iterations
@@ -119,6 +136,7 @@ public final class WeightedLeastSquares {
       parameters = parameters.clone();
       standardErrors = standardErrors.clone();
       covariance = deepCopy(covariance);
+      equalNoiseCovariance = deepCopy(equalNoiseCovariance);
       residuals = residuals.clone();
     }
 
@@ -153,7 +171,17 @@ public final class WeightedLeastSquares {
     }
 
     /**
-     * Unweighted residuals.
+     * Covariance for design weights on observations of equal noise.
+     *
+     * @return a copy
+     */
+    @Override
+    public double[][] equalNoiseCovariance() {
+      return deepCopy(equalNoiseCovariance);
+    }
+
+    /**
+     * Unweighted residuals at the optimum.
      *
      * @return a copy
      */
@@ -196,6 +224,12 @@ public final class WeightedLeastSquares {
   public static final int DEFAULT_MAX_ITERATIONS = 1000;
 
   private static final double SINGULARITY_THRESHOLD = 1e-14;
+
+  /** Gauss-Newton steps of {@link #refineStreamed} before it hands over to Levenberg-Marquardt. */
+  public static final int MAX_NEWTON_STEPS = 4;
+
+  /** Eigenvalues of the scaled normal matrix below this fraction of the largest count as 0. */
+  private static final double NEGLIGIBLE_EIGENVALUE = 1e-15;
 
   private final int maxIterations;
   private final double tolerance;
@@ -297,69 +331,464 @@ public final class WeightedLeastSquares {
           return new Pair<>(
               new ArrayRealVector(values, false), new Array2DRowRealMatrix(jacobian, false));
         };
-    LeastSquaresBuilder builder =
-        new LeastSquaresBuilder()
-            .model(function)
-            .target(target)
-            .start(start)
-            .maxIterations(maxIterations)
-            .maxEvaluations(10 * maxIterations)
-            .lazyEvaluation(false);
+    LeastSquaresBuilder builder = builder(function, target, start);
     if (validator != null) {
       builder.parameterValidator(validator);
     }
+    final Optimum optimum = optimize(builder);
+    final RealMatrix unscaled;
+    try {
+      unscaled = optimum.getCovariances(SINGULARITY_THRESHOLD);
+    } catch (SingularMatrixException e) {
+      throw new FitException(
+          "the parameters cannot all be determined from these readings (singular normal matrix)",
+          e);
+    }
+    double[] parameters = optimum.getPoint().toArray();
+    requireFinite(parameters);
+    // Residuals and Jacobian rows of the optimiser are scaled by sqrt(w).
+    double[] residuals = optimum.getResiduals().toArray();
+    double[][] weightedJacobian = optimum.getJacobian().getData();
+    double chiSquare = 0;
+    double[][] b = new double[p][p];
+    for (int i = 0; i < n; i++) {
+      chiSquare += residuals[i] * residuals[i];
+      residuals[i] /= rootWeights[i];
+      for (int j = 0; j < p; j++) {
+        for (int k = 0; k < p; k++) {
+          b[j][k] += weights[i] * weightedJacobian[i][j] * weightedJacobian[i][k];
+        }
+      }
+    }
+    return solution(
+        parameters,
+        residuals,
+        chiSquare,
+        unscaled.getData(),
+        b,
+        optimum.getIterations(),
+        optimum.getEvaluations());
+  }
+
+  /**
+   * Fits the model as {@link #solve} does, for many observations and few parameters: each
+   * evaluation is one pass over the observations that sums A = J<sup>T</sup>WJ, g = J<sup>T
+   * </sup>Wr and c = r<sup>T</sup>Wr, and is handed to Levenberg-Marquardt as p + 1 rows with the
+   * same normal matrix, gradient and cost: with A = V&Lambda;V<sup>T</sup>, the rows
+   * &Lambda;<sup>1/2</sup>V<sup>T</sup> and the residuals z = &Lambda;<sup>-1/2</sup>V<sup>T</sup>g
+   * followed by &radic;(c - |z|<sup>2</sup>). The Levenberg-Marquardt step, its trust region and
+   * its convergence tests use only these three quantities, so the iterates are those of {@link
+   * #solve} up to rounding; memory and time per evaluation are O(n p<sup>2</sup>) with nothing of
+   * size n &times; p kept. The price is forming the normal matrix, which squares its condition
+   * number: use it where the parameters are well determined (the columns are scaled to unit
+   * diagonal before the eigen-decomposition, Commons Math {@code EigenDecomposition}). Directions
+   * whose eigenvalue is below 10<sup>-15</sup> of the largest are not moved.
+   *
+   * @param model the model, called for each observation
+   * @param observed observations y<sub>i</sub>, finite; n &gt; p
+   * @param weights weights w<sub>i</sub> &gt; 0 and finite, same length as the observations
+   * @param start starting parameters, finite
+   * @param validator maps a trial parameter vector to an admissible one (for bounds), or null
+   * @return the solution, with the same statistics as {@link #solve}
+   * @throws IllegalArgumentException if lengths disagree, a value is not finite, a weight is not
+   *     positive, or there are not more observations than parameters
+   * @throws FitException if the optimiser does not converge, the model returns a non-finite value,
+   *     or the parameters are not identifiable (singular normal matrix)
+   */
+  public Solution solveStreamed(
+      PointModel model,
+      double[] observed,
+      double[] weights,
+      double[] start,
+      ParameterValidator validator) {
+    Objects.requireNonNull(model, "model");
+    validate(observed, weights, start);
+    final int p = start.length;
+    // The last evaluations, so that the optimum's pass is not repeated.
+    final Pass[] recent = new Pass[2];
+    MultivariateJacobianFunction function =
+        point -> {
+          double[] parameters = point.toArray();
+          Pass pass = Pass.over(model, observed, weights, parameters);
+          recent[1] = recent[0];
+          recent[0] = pass;
+          return pass.compressed();
+        };
+    LeastSquaresBuilder builder = builder(function, new double[p + 1], start);
+    if (validator != null) {
+      builder.parameterValidator(validator);
+    }
+    final Optimum optimum = optimize(builder);
+    double[] parameters = optimum.getPoint().toArray();
+    requireFinite(parameters);
+    Pass atOptimum = null;
+    for (Pass pass : recent) {
+      if (pass != null && Arrays.equals(pass.parameters, parameters)) {
+        atOptimum = pass;
+        break;
+      }
+    }
+    if (atOptimum == null) {
+      atOptimum = Pass.over(model, observed, weights, parameters);
+    }
+    return solution(
+        parameters,
+        atOptimum.residuals,
+        atOptimum.weightedSquares,
+        atOptimum.inverseNormalMatrix(),
+        atOptimum.squaredWeightMatrix,
+        optimum.getIterations(),
+        optimum.getEvaluations());
+  }
+
+  /**
+   * Finishes a fit that starts close to the optimum with as few passes over the observations as
+   * possible: Gauss-Newton steps &delta; = A<sup>-1</sup>g (A = J<sup>T</sup>WJ, g =
+   * J<sup>T</sup>Wr, one pass each), stopping as soon as the step still to be taken is below {@code
+   * standardErrorFraction} of a standard error in the metric of the covariance, that is g<sup>T
+   * </sup>A<sup>-1</sup>g &le; f<sup>2</sup> s<sup>2</sup> with s<sup>2</sup> = &Sigma; w r<sup>2
+   * </sup>/(n - p) (or below the solver's relative tolerance of the cost, for exact data). The
+   * start itself is accepted when it already meets this, which costs one pass. A step that raises
+   * the cost or that the validator changes, or more than {@value #MAX_NEWTON_STEPS} steps, hands
+   * over to {@link #solveStreamed} from the best point so far: the result is then the
+   * Levenberg-Marquardt optimum.
+   *
+   * @param model the model, called for each observation
+   * @param observed observations y<sub>i</sub>, finite; n &gt; p
+   * @param weights weights w<sub>i</sub> &gt; 0 and finite, same length as the observations
+   * @param start starting parameters, finite; close to the optimum
+   * @param validator maps a trial parameter vector to an admissible one (for bounds), or null
+   * @param standardErrorFraction f, the largest distance to the optimum accepted, in standard
+   *     errors; in (0, 1]
+   * @return the solution, with the same statistics as {@link #solve}; iterations count the steps
+   *     and evaluations the passes
+   * @throws IllegalArgumentException as {@link #solve}, or if the fraction is out of range
+   * @throws FitException as {@link #solve}
+   */
+  public Solution refineStreamed(
+      PointModel model,
+      double[] observed,
+      double[] weights,
+      double[] start,
+      ParameterValidator validator,
+      double standardErrorFraction) {
+    Objects.requireNonNull(model, "model");
+    validate(observed, weights, start);
+    if (!(standardErrorFraction > 0 && standardErrorFraction <= 1)) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "standard error fraction (%s) must be in (0, 1]",
+              standardErrorFraction));
+    }
+    final int n = observed.length;
+    final int p = start.length;
+    Pass pass;
+    try {
+      pass = Pass.over(model, observed, weights, start.clone());
+    } catch (NonFiniteModelException e) {
+      throw new FitException(e.getMessage(), e);
+    }
+    int passes = 1;
+    for (int step = 0; step <= MAX_NEWTON_STEPS; step++) {
+      double[] delta = pass.newtonStep();
+      double decrement = 0;
+      for (int j = 0; j < p; j++) {
+        decrement += delta[j] * pass.gradient[j];
+      }
+      double variance = pass.weightedSquares / (n - p);
+      if (decrement <= standardErrorFraction * standardErrorFraction * variance
+          || decrement <= tolerance * pass.weightedSquares) {
+        return solution(
+            pass.parameters,
+            pass.residuals,
+            pass.weightedSquares,
+            pass.inverseNormalMatrix(),
+            pass.squaredWeightMatrix,
+            step,
+            passes);
+      }
+      if (step == MAX_NEWTON_STEPS) {
+        break;
+      }
+      double[] trial = pass.parameters.clone();
+      for (int j = 0; j < p; j++) {
+        trial[j] += delta[j];
+      }
+      if (validator != null) {
+        double[] admitted = validator.validate(new ArrayRealVector(trial)).toArray();
+        if (!Arrays.equals(admitted, trial)) {
+          break;
+        }
+      }
+      Pass next;
+      try {
+        next = Pass.over(model, observed, weights, trial);
+      } catch (NonFiniteModelException e) {
+        break;
+      }
+      passes++;
+      if (!(next.weightedSquares <= pass.weightedSquares)) {
+        break;
+      }
+      pass = next;
+    }
+    return solveStreamed(model, observed, weights, pass.parameters, validator);
+  }
+
+  private LeastSquaresBuilder builder(
+      MultivariateJacobianFunction function, double[] target, double[] start) {
+    return new LeastSquaresBuilder()
+        .model(function)
+        .target(target)
+        .start(start)
+        .maxIterations(maxIterations)
+        .maxEvaluations(10 * maxIterations)
+        .lazyEvaluation(false);
+  }
+
+  private Optimum optimize(LeastSquaresBuilder builder) {
     LevenbergMarquardtOptimizer optimizer =
         new LevenbergMarquardtOptimizer()
             .withCostRelativeTolerance(tolerance)
             .withParameterRelativeTolerance(tolerance)
             .withOrthoTolerance(tolerance);
-    final Optimum optimum;
-    final RealMatrix unscaled;
     try {
-      optimum = optimizer.optimize(builder.build());
-      unscaled = optimum.getCovariances(SINGULARITY_THRESHOLD);
+      return optimizer.optimize(builder.build());
     } catch (NonFiniteModelException e) {
       throw new FitException(e.getMessage(), e);
     } catch (TooManyEvaluationsException | TooManyIterationsException e) {
       throw new FitException(
           "the least-squares fit did not converge within " + maxIterations + " iterations", e);
-    } catch (SingularMatrixException e) {
-      throw new FitException(
-          "the parameters cannot all be determined from these readings (singular normal matrix)",
-          e);
     } catch (MathIllegalStateException | MathIllegalArgumentException | MathArithmeticException e) {
       throw new FitException("the least-squares fit failed: " + e.getMessage(), e);
     }
-    double[] parameters = optimum.getPoint().toArray();
+  }
+
+  private static void requireFinite(double[] parameters) {
     for (double value : parameters) {
       if (!Double.isFinite(value)) {
         throw new FitException("the least-squares fit diverged to a non-finite parameter");
       }
     }
-    double[] residuals = new double[n];
-    model.evaluate(parameters, residuals, new double[n][p]);
-    double chiSquare = 0;
-    for (int i = 0; i < n; i++) {
-      residuals[i] = observed[i] - residuals[i];
-      chiSquare += weights[i] * residuals[i] * residuals[i];
-    }
+  }
+
+  /**
+   * The solution from the residuals, &Sigma; w r<sup>2</sup>, A<sup>-1</sup> and B at the optimum.
+   */
+  private static Solution solution(
+      double[] parameters,
+      double[] residuals,
+      double chiSquare,
+      double[][] inverse,
+      double[][] b,
+      int iterations,
+      int evaluations) {
+    int n = residuals.length;
+    int p = parameters.length;
     double variance = chiSquare / (n - p);
+    double sumSquares = 0;
+    for (double r : residuals) {
+      sumSquares += r * r;
+    }
+    double noiseVariance = sumSquares / (n - p);
     double[][] covariance = new double[p][p];
+    double[][] sandwich = new double[p][p];
     double[] errors = new double[p];
     for (int j = 0; j < p; j++) {
       for (int k = 0; k < p; k++) {
-        covariance[j][k] = unscaled.getEntry(j, k) * variance;
+        covariance[j][k] = inverse[j][k] * variance;
+        double sum = 0;
+        for (int l = 0; l < p; l++) {
+          for (int m = 0; m < p; m++) {
+            sum += inverse[j][l] * b[l][m] * inverse[m][k];
+          }
+        }
+        sandwich[j][k] = sum * noiseVariance;
       }
       errors[j] = Math.sqrt(Math.max(0.0, covariance[j][j]));
     }
+    for (double[] row : sandwich) {
+      for (double value : row) {
+        if (!Double.isFinite(value)) {
+          throw new FitException(
+              "the parameters cannot all be determined from these readings (their covariance is"
+                  + " not finite)");
+        }
+      }
+    }
     return new Solution(
-        parameters,
-        errors,
-        covariance,
-        chiSquare,
-        residuals,
-        optimum.getIterations(),
-        optimum.getEvaluations());
+        parameters, errors, covariance, sandwich, chiSquare, residuals, iterations, evaluations);
+  }
+
+  /**
+   * One pass over the observations at one parameter vector: unweighted residuals, the sums A =
+   * J<sup>T</sup>WJ, B = J<sup>T</sup>W<sup>2</sup>J, g = J<sup>T</sup>Wr and c = r<sup>T</sup>Wr.
+   */
+  private static final class Pass {
+    final double[] parameters;
+    final double[] residuals;
+    final double[][] normalMatrix;
+    final double[][] squaredWeightMatrix;
+    final double[] gradient;
+    final double weightedSquares;
+
+    private Pass(
+        double[] parameters,
+        double[] residuals,
+        double[][] normalMatrix,
+        double[][] squaredWeightMatrix,
+        double[] gradient,
+        double weightedSquares) {
+      this.parameters = parameters;
+      this.residuals = residuals;
+      this.normalMatrix = normalMatrix;
+      this.squaredWeightMatrix = squaredWeightMatrix;
+      this.gradient = gradient;
+      this.weightedSquares = weightedSquares;
+    }
+
+    static Pass over(PointModel model, double[] observed, double[] weights, double[] parameters) {
+      int n = observed.length;
+      int p = parameters.length;
+      double[] residuals = new double[n];
+      double[][] a = new double[p][p];
+      double[][] b = new double[p][p];
+      double[] g = new double[p];
+      double c = 0;
+      double[] row = new double[p];
+      for (int i = 0; i < n; i++) {
+        double value = model.valueAndGradient(i, parameters, row);
+        if (!Double.isFinite(value)) {
+          throw new NonFiniteModelException(i, value, parameters);
+        }
+        double r = observed[i] - value;
+        residuals[i] = r;
+        double w = weights[i];
+        c += w * r * r;
+        for (int j = 0; j < p; j++) {
+          double wj = w * row[j];
+          if (!Double.isFinite(row[j])) {
+            throw new NonFiniteModelException(i, row[j], parameters);
+          }
+          g[j] += wj * r;
+          for (int k = 0; k <= j; k++) {
+            a[j][k] += wj * row[k];
+            b[j][k] += w * wj * row[k];
+          }
+        }
+      }
+      for (int j = 0; j < p; j++) {
+        for (int k = 0; k < j; k++) {
+          a[k][j] = a[j][k];
+          b[k][j] = b[j][k];
+        }
+      }
+      return new Pass(parameters, residuals, a, b, g, c);
+    }
+
+    /** Eigen-decomposition of the normal matrix scaled to unit diagonal: {scale, values, V}. */
+    private Object[] decomposition() {
+      int p = parameters.length;
+      double[] scale = new double[p];
+      double[][] scaled = new double[p][p];
+      for (int j = 0; j < p; j++) {
+        scale[j] = normalMatrix[j][j] > 0 ? Math.sqrt(normalMatrix[j][j]) : 1.0;
+      }
+      for (int j = 0; j < p; j++) {
+        for (int k = 0; k < p; k++) {
+          scaled[j][k] = normalMatrix[j][k] / (scale[j] * scale[k]);
+        }
+      }
+      EigenDecomposition eigen = new EigenDecomposition(new Array2DRowRealMatrix(scaled, false));
+      double[] values = eigen.getRealEigenvalues();
+      double largest = 0;
+      for (double value : values) {
+        largest = Math.max(largest, value);
+      }
+      for (int k = 0; k < p; k++) {
+        if (!(values[k] > NEGLIGIBLE_EIGENVALUE * largest)) {
+          values[k] = 0.0;
+        }
+      }
+      return new Object[] {scale, values, eigen.getV().getData()};
+    }
+
+    /** The p + 1 compressed rows (negated residuals as values, target 0) for the optimiser. */
+    Pair<RealVector, RealMatrix> compressed() {
+      int p = parameters.length;
+      Object[] parts = decomposition();
+      double[] scale = (double[]) parts[0];
+      double[] values = (double[]) parts[1];
+      double[][] v = (double[][]) parts[2];
+      double[][] rows = new double[p + 1][p];
+      double[] negated = new double[p + 1];
+      double explained = 0;
+      for (int k = 0; k < p; k++) {
+        double root = Math.sqrt(values[k]);
+        double projection = 0;
+        for (int j = 0; j < p; j++) {
+          rows[k][j] = root * v[j][k] * scale[j];
+          projection += v[j][k] * gradient[j] / scale[j];
+        }
+        double z = values[k] > 0 ? projection / root : 0.0;
+        negated[k] = -z;
+        explained += z * z;
+      }
+      negated[p] = -Math.sqrt(Math.max(0.0, weightedSquares - explained));
+      return new Pair<>(new ArrayRealVector(negated, false), new Array2DRowRealMatrix(rows, false));
+    }
+
+    /** The Gauss-Newton step A<sup>+</sup>g (directions of negligible eigenvalue not moved). */
+    double[] newtonStep() {
+      int p = parameters.length;
+      Object[] parts = decomposition();
+      double[] scale = (double[]) parts[0];
+      double[] values = (double[]) parts[1];
+      double[][] v = (double[][]) parts[2];
+      double[] step = new double[p];
+      for (int k = 0; k < p; k++) {
+        if (values[k] == 0.0) {
+          continue;
+        }
+        double projection = 0;
+        for (int j = 0; j < p; j++) {
+          projection += v[j][k] * gradient[j] / scale[j];
+        }
+        double coefficient = projection / values[k];
+        for (int j = 0; j < p; j++) {
+          step[j] += v[j][k] * coefficient / scale[j];
+        }
+      }
+      return step;
+    }
+
+    /** A<sup>-1</sup> from the scaled eigen-decomposition; FitException if singular. */
+    double[][] inverseNormalMatrix() {
+      int p = parameters.length;
+      Object[] parts = decomposition();
+      double[] scale = (double[]) parts[0];
+      double[] values = (double[]) parts[1];
+      double[][] v = (double[][]) parts[2];
+      double[][] inverse = new double[p][p];
+      for (int k = 0; k < p; k++) {
+        if (values[k] == 0.0) {
+          throw new FitException(
+              "the parameters cannot all be determined from these readings (singular normal"
+                  + " matrix)");
+        }
+      }
+      for (int j = 0; j < p; j++) {
+        for (int l = 0; l < p; l++) {
+          double sum = 0;
+          for (int k = 0; k < p; k++) {
+            sum += v[j][k] * v[l][k] / values[k];
+          }
+          inverse[j][l] = sum / (scale[j] * scale[l]);
+        }
+      }
+      return inverse;
+    }
   }
 
   private static void validate(double[] observed, double[] weights, double[] start) {

@@ -11,6 +11,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.apache.commons.math3.linear.MatrixUtils;
+import org.apache.commons.math3.linear.RealMatrix;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -190,6 +192,37 @@ class WeightedLeastSquaresTest {
 
   @ParameterizedTest(name = "{0}, start {1}")
   @DisplayName(
+      "Streamed (normal-equation) solver: NIST StRD certified parameters (6 digits), standard"
+          + " deviations (4 digits) and residual sum of squares (6 digits) [NIST StRD]")
+  @CsvSource({
+    "Misra1a, 1",
+    "Misra1a, 2",
+    "Chwirut2, 1",
+    "Chwirut2, 2",
+    "DanWood, 1",
+    "DanWood, 2",
+    "BoxBOD, 2",
+    "Thurber, 1",
+    "Thurber, 2",
+    "Rat43, 1",
+    "Rat43, 2",
+    "Misra1c, 1",
+    "Misra1c, 2",
+    "Eckerle4, 1",
+    "Eckerle4, 2",
+    "MGH09, 1",
+    "MGH09, 2"
+  })
+  void streamedReproducesCertifiedResults(String name, int start) throws IOException {
+    Dataset d = Dataset.load(name);
+    WeightedLeastSquares.Solution s =
+        WeightedLeastSquares.withDefaults()
+            .solveStreamed(pointModel(d), d.y(), unitWeights(d), d.starts()[start - 1], null);
+    assertCertified(d, s);
+  }
+
+  @ParameterizedTest(name = "{0}, start {1}")
+  @DisplayName(
       "NIST StRD certified parameters (6 digits), standard deviations (4 digits) and"
           + " residual sum of squares (6 digits) [NIST StRD]")
   @CsvSource({
@@ -335,5 +368,214 @@ class WeightedLeastSquaresTest {
     }
     // Standard error of the slope: sqrt(s^2 sw / det), s^2 = chi / (n - 2).
     assertThat(s.standardErrors()[1]).isCloseTo(Math.sqrt(chi / 3 * sw / det), within(1e-12));
+  }
+
+  @Test
+  @DisplayName(
+      "Equal-noise (sandwich) covariance of a weighted straight line: A^-1 B A^-1 times the"
+          + " unweighted residual variance, computed here with Commons Math matrices; equal to the"
+          + " plain covariance for unit weights [sandwich estimator, any regression text, from"
+          + " memory]")
+  void equalNoiseCovarianceOfWeightedLine() {
+    double[] x = {0, 1, 2, 3, 4, 5};
+    double[] y = {1.0, 2.9, 5.2, 6.8, 9.1, 11.2};
+    double[] w = {1, 4, 1, 4, 1, 2};
+    WeightedLeastSquares.PointModel line =
+        (i, b, g) -> {
+          g[0] = 1;
+          g[1] = x[i];
+          return b[0] + b[1] * x[i];
+        };
+    WeightedLeastSquares solver = WeightedLeastSquares.withDefaults();
+    for (WeightedLeastSquares.Solution s :
+        List.of(
+            solver.solve(line.asModel(), y, w, new double[] {0, 0}, null),
+            solver.solveStreamed(line, y, w, new double[] {0, 0}, null))) {
+      double[][] design = new double[x.length][];
+      double[] weightedSquares = new double[x.length];
+      double sumSquares = 0;
+      for (int i = 0; i < x.length; i++) {
+        design[i] = new double[] {1, x[i]};
+        double r = y[i] - s.parameters()[0] - s.parameters()[1] * x[i];
+        sumSquares += r * r;
+        weightedSquares[i] = w[i] * w[i];
+      }
+      RealMatrix j = MatrixUtils.createRealMatrix(design);
+      RealMatrix a = j.transpose().multiply(MatrixUtils.createRealDiagonalMatrix(w)).multiply(j);
+      RealMatrix b =
+          j.transpose().multiply(MatrixUtils.createRealDiagonalMatrix(weightedSquares)).multiply(j);
+      RealMatrix inverse = MatrixUtils.inverse(a);
+      RealMatrix expected =
+          inverse.multiply(b).multiply(inverse).scalarMultiply(sumSquares / (x.length - 2));
+      for (int r = 0; r < 2; r++) {
+        for (int c = 0; c < 2; c++) {
+          assertThat(s.equalNoiseCovariance()[r][c])
+              .isCloseTo(
+                  expected.getEntry(r, c), within(1e-12 * Math.abs(expected.getEntry(r, c))));
+        }
+      }
+    }
+    double[] unit = new double[x.length];
+    java.util.Arrays.fill(unit, 1.0);
+    WeightedLeastSquares.Solution plain =
+        solver.solveStreamed(line, y, unit, new double[] {0, 0}, null);
+    for (int r = 0; r < 2; r++) {
+      for (int c = 0; c < 2; c++) {
+        assertThat(plain.equalNoiseCovariance()[r][c])
+            .isCloseTo(
+                plain.covariance()[r][c], within(1e-12 * Math.abs(plain.covariance()[r][c])));
+      }
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Streamed solver: the same optimum as the plain solver on a weighted 8,000-point exponential"
+          + " decay to 1e-9 relative [the plain Commons Math Levenberg-Marquardt as reference]")
+  void streamedMatchesPlainOnManyPoints() {
+    int n = 8000;
+    double[] x = new double[n];
+    double[] y = new double[n];
+    double[] w = new double[n];
+    java.util.SplittableRandom random = new java.util.SplittableRandom(7);
+    for (int i = 0; i < n; i++) {
+      x[i] = 0.01 * i;
+      y[i] = 3.0 * Math.exp(-0.7 * x[i]) + 0.5 + 0.01 * random.nextGaussian();
+      w[i] = 1.0 + (i % 5);
+    }
+    WeightedLeastSquares.PointModel decay =
+        (i, b, g) -> {
+          double e = Math.exp(-b[1] * x[i]);
+          g[0] = e;
+          g[1] = -b[0] * x[i] * e;
+          g[2] = 1;
+          return b[0] * e + b[2];
+        };
+    double[] start = {1, 0.2, 0};
+    WeightedLeastSquares solver = WeightedLeastSquares.withDefaults();
+    WeightedLeastSquares.Solution plain = solver.solve(decay.asModel(), y, w, start, null);
+    WeightedLeastSquares.Solution streamed = solver.solveStreamed(decay, y, w, start, null);
+    for (int j = 0; j < 3; j++) {
+      assertThat(streamed.parameters()[j])
+          .isCloseTo(plain.parameters()[j], within(1e-9 * Math.abs(plain.parameters()[j])));
+      assertThat(streamed.standardErrors()[j])
+          .isCloseTo(plain.standardErrors()[j], within(1e-6 * plain.standardErrors()[j]));
+    }
+    assertThat(streamed.weightedResidualSumOfSquares())
+        .isCloseTo(
+            plain.weightedResidualSumOfSquares(),
+            within(1e-12 * plain.weightedResidualSumOfSquares()));
+    assertThat(streamed.residuals()).hasSize(n);
+  }
+
+  @Test
+  @DisplayName("Streamed solver: unidentifiable parameters give a FitException, not NaN")
+  void streamedSingular() {
+    double[] y = {1, 2, 3, 4, 5};
+    double[] w = {1, 1, 1, 1, 1};
+    WeightedLeastSquares.PointModel twice =
+        (i, b, g) -> {
+          g[0] = 1;
+          g[1] = 1;
+          return b[0] + b[1];
+        };
+    assertThatThrownBy(
+            () ->
+                WeightedLeastSquares.withDefaults()
+                    .solveStreamed(twice, y, w, new double[] {0, 0}, null))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("cannot all be determined");
+  }
+
+  /** The weighted exponential decay of {@link #streamedMatchesPlainOnManyPoints}, with noise. */
+  private static double[][] decayData(int n, long seed) {
+    double[] x = new double[n];
+    double[] y = new double[n];
+    double[] w = new double[n];
+    java.util.SplittableRandom random = new java.util.SplittableRandom(seed);
+    for (int i = 0; i < n; i++) {
+      x[i] = 0.01 * i;
+      y[i] = 3.0 * Math.exp(-0.7 * x[i]) + 0.5 + 0.01 * random.nextGaussian();
+      w[i] = 1.0 + (i % 5);
+    }
+    return new double[][] {x, y, w};
+  }
+
+  private static WeightedLeastSquares.PointModel decayModel(double[] x) {
+    return (i, b, g) -> {
+      double e = Math.exp(-b[1] * x[i]);
+      g[0] = e;
+      g[1] = -b[0] * x[i] * e;
+      g[2] = 1;
+      return b[0] * e + b[2];
+    };
+  }
+
+  @Test
+  @DisplayName(
+      "Refinement: from one standard error away it ends within 0.01 standard errors of the"
+          + " Levenberg-Marquardt optimum; at the optimum it accepts the start after one pass"
+          + " [the plain Commons Math Levenberg-Marquardt as reference]")
+  void refinementReachesTheOptimum() {
+    double[][] data = decayData(5000, 11);
+    WeightedLeastSquares.PointModel decay = decayModel(data[0]);
+    WeightedLeastSquares solver = WeightedLeastSquares.withDefaults();
+    WeightedLeastSquares.Solution plain =
+        solver.solve(decay.asModel(), data[1], data[2], new double[] {1, 0.2, 0}, null);
+    double[] errors = plain.standardErrors();
+    double[] start = plain.parameters();
+    for (int j = 0; j < 3; j++) {
+      start[j] += (j == 1 ? -1 : 1) * errors[j];
+    }
+    WeightedLeastSquares.Solution refined =
+        solver.refineStreamed(decay, data[1], data[2], start, null, 0.01);
+    for (int j = 0; j < 3; j++) {
+      assertThat(Math.abs(refined.parameters()[j] - plain.parameters()[j]))
+          .as("parameter %d, in standard errors", j)
+          .isLessThanOrEqualTo(0.01 * errors[j]);
+    }
+    assertThat(refined.evaluations()).isBetween(2, 1 + WeightedLeastSquares.MAX_NEWTON_STEPS);
+    WeightedLeastSquares.Solution accepted =
+        solver.refineStreamed(decay, data[1], data[2], plain.parameters(), null, 0.01);
+    assertThat(accepted.evaluations()).isEqualTo(1);
+    assertThat(accepted.iterations()).isZero();
+    assertThat(accepted.parameters()).containsExactly(plain.parameters());
+    assertThat(accepted.standardErrors()[1]).isCloseTo(errors[1], within(1e-6 * errors[1]));
+  }
+
+  @Test
+  @DisplayName(
+      "Refinement: a start far away or a step the validator changes hands over to"
+          + " Levenberg-Marquardt, which reaches the same optimum [plain Commons Math"
+          + " Levenberg-Marquardt as reference]")
+  void refinementHandsOver() {
+    double[][] data = decayData(3000, 12);
+    WeightedLeastSquares.PointModel decay = decayModel(data[0]);
+    WeightedLeastSquares solver = WeightedLeastSquares.withDefaults();
+    WeightedLeastSquares.Solution plain =
+        solver.solve(decay.asModel(), data[1], data[2], new double[] {1, 0.2, 0}, null);
+    WeightedLeastSquares.Solution far =
+        solver.refineStreamed(decay, data[1], data[2], new double[] {1, 0.2, 0}, null, 0.01);
+    WeightedLeastSquares.Solution bounded =
+        solver.refineStreamed(
+            decay,
+            data[1],
+            data[2],
+            new double[] {1, 0.2, 0},
+            point -> {
+              point.setEntry(1, Math.max(0.05, point.getEntry(1)));
+              return point;
+            },
+            0.01);
+    for (WeightedLeastSquares.Solution s : List.of(far, bounded)) {
+      for (int j = 0; j < 3; j++) {
+        assertThat(s.parameters()[j])
+            .isCloseTo(plain.parameters()[j], within(0.01 * plain.standardErrors()[j]));
+      }
+    }
+    assertThatThrownBy(
+            () -> solver.refineStreamed(decay, data[1], data[2], new double[] {1, 1, 0}, null, 0))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("standard error fraction (0.0) must be in (0, 1]");
   }
 }
