@@ -63,6 +63,75 @@ class EarlySlopeMethodTest {
 
   @Test
   @DisplayName(
+      "Initial compression 4 % and 10 % of d_p with the default d100 (the hyperbola counts from the"
+          + " same corrected zero): c_v within the dense tolerance of 0.3 % (exact dense curves)")
+  void initialCompressionWithHyperbola() {
+    for (double fraction : new double[] {0.04, 0.10}) {
+      double cv = 2 / ExactCurves.YEAR;
+      EarlySlopeResult r = EarlySlopeMethod.fit(ExactCurves.dense(cv, fraction * 0.5e-3), H);
+      assertThat(r.cv() / cv - 1).as("d_i %s d_p", fraction).isCloseTo(0, within(3e-3));
+      assertThat(r.d0()).isCloseTo(fraction * 0.5e-3, within(1e-3 * 0.5e-3));
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Usual 14-reading lab schedule (FACTS.md, from memory), exact Terzaghi curves from the"
+          + " theory module with T at 24 h from 2 to 50, d_i 0 / 4 % / 10 % of d_p, secondary slope"
+          + " 0 / 2 % of d_p per cycle: c_v within 2.5 % (measured up to 2.2 %), with the"
+          + " hyperbola's warning")
+  void labSchedule() {
+    double worst = 0;
+    for (double lastT : LabScheduleCurves.lastTimeFactors(2, 50, 40)) {
+      for (double initial : new double[] {0, 0.04, 0.10}) {
+        for (double secondary : new double[] {0, 0.02}) {
+          EarlySlopeResult r =
+              EarlySlopeMethod.fit(LabScheduleCurves.curve(lastT, initial, secondary), H);
+          double error = r.cv() / LabScheduleCurves.cv(lastT) - 1;
+          assertThat(error)
+              .as("T %s, d_i %s, s %s", lastT, initial, secondary)
+              .isCloseTo(0, within(0.025));
+          worst = Math.max(worst, Math.abs(error));
+          assertThat(r.warnings()).isNotEmpty();
+        }
+      }
+    }
+    assertThat(worst).isGreaterThan(0.015);
+  }
+
+  @Test
+  @DisplayName(
+      "Lab schedule, T at 24 h of 1.2 (the hyperbola has too few readings to interpolate):"
+          + " FitException from the default, never a value")
+  void labScheduleIncomplete() {
+    SettlementCurve c = LabScheduleCurves.curve(1.2, 0.04, 0);
+    assertThatThrownBy(() -> EarlySlopeMethod.fit(c, H))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("rectangular hyperbola");
+  }
+
+  @Test
+  @DisplayName(
+      "Only 2 readings before 50 % (T = 0.1 and 0.15), 3 before 60 %: the early line uses the"
+          + " readings before 60 %, with a warning; c_v within 3 % (the square-root law is 1.3 %"
+          + " off at 60 %, FACTS.md)")
+  void fewEarlyReadingsWidenTheWindow() {
+    double cv = 2 / ExactCurves.YEAR;
+    double h2 = H * H;
+    double[] factors = {0.1, 0.15, 0.25, 0.4, 0.6, 1, 2, 5};
+    double[] t = new double[factors.length];
+    for (int i = 0; i < t.length; i++) {
+      t[i] = factors[i] * h2 / cv;
+    }
+    SettlementCurve c = ExactCurves.curve(t, CurveParameters.of(0, 0.5e-3, cv, 0));
+    EarlySlopeResult r = EarlySlopeMethod.fit(c, H, LAST);
+    assertThat(r.hasWarning(FitWarning.Kind.FEW_EARLY_READINGS)).isTrue();
+    assertThat(r.readingsUsed()).hasSize(3);
+    assertThat(r.cv() / cv - 1).isCloseTo(0, within(0.03));
+  }
+
+  @Test
+  @DisplayName(
       "Documented bias: with secondary compression the last reading overstates d_p and c_v comes"
           + " out low")
   void lastReadingBiasWithSecondary() {
@@ -125,7 +194,8 @@ class EarlySlopeMethodTest {
             ExactCurves.logTimes(cv, 0.3, 5, 20), CurveParameters.of(0, 0.5e-3, cv, 0));
     assertThatThrownBy(() -> EarlySlopeMethod.fit(late, H, LAST))
         .isInstanceOf(FitException.class)
-        .hasMessageContaining("before 50 % consolidation");
+        .hasMessageContaining("before 50 % consolidation")
+        .hasMessageContaining("before 60 %");
   }
 
   @Test
