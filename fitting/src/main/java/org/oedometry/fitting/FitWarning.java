@@ -59,8 +59,10 @@ public record FitWarning(Kind kind, String message) {
      */
     READINGS_END_BEFORE_RANGE,
     /**
-     * The readings are not equally spaced in time and were resampled at equal steps by a
-     * shape-preserving interpolation (Asaoka's method).
+     * The method worked on settlements interpolated between the readings rather than on the
+     * readings themselves: resampled at equal time steps by a shape-preserving interpolation
+     * (Asaoka's method, for readings not equally spaced), or interpolated on log time inside the
+     * 60-90 % range (rectangular hyperbola, for too few readings there).
      */
     READINGS_RESAMPLED,
     /**

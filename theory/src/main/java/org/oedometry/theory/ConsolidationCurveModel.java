@@ -161,13 +161,27 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
   }
 
   /**
-   * log10(1 + T / T_s), the secondary term per unit slope: log1p below a ratio of 1/2, where it
-   * matters; above, log(1 + x), within 3 ulp (the rounding of 1 + x costs at most 2<sup>-53</sup> /
-   * ln 1.5 relative) and faster on common Java runtimes.
+   * log10(1 + T / T_s), the secondary term per unit slope. ln(1 + x) is computed as ln(u) x / (u -
+   * 1) with u = 1 + x rounded (x itself when u = 1): the rounding error of u cancels between ln u
+   * and u - 1, so the result is accurate to a few ulp for every x &ge; 0 (Goldberg 1991, "What
+   * every computer scientist should know about floating-point arithmetic", ACM Computing Surveys
+   * 23(1), theorem 4), while {@link Math#log} is several times faster than {@link Math#log1p} on
+   * common Java runtimes.
    */
   private double secondaryShape(double timeFactor) {
-    final double ratio = timeFactor / secondaryOnset;
-    return (ratio < 0.5 ? Math.log1p(ratio) : Math.log(1.0 + ratio)) / LN_10;
+    return naturalLogOnePlus(timeFactor / secondaryOnset) / LN_10;
+  }
+
+  /** ln(1 + x) for x &ge; 0 by Goldberg's theorem 4 (see {@link #secondaryShape}). */
+  static double naturalLogOnePlus(double x) {
+    final double u = 1.0 + x;
+    if (u == 1.0) {
+      return x;
+    }
+    if (u == Double.POSITIVE_INFINITY) {
+      return Math.log(x);
+    }
+    return Math.log(u) * (x / (u - 1.0));
   }
 
   private static void requireTime(double seconds) {

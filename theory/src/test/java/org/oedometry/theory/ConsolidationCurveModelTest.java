@@ -141,4 +141,37 @@ class ConsolidationCurveModelTest {
     UnivariateDifferentiableFunction g = scaled.differentiate(f::applyAsDouble);
     return g.value(new DerivativeStructure(1, 1, 0, at)).getPartialDerivative(1);
   }
+
+  @Test
+  @DisplayName(
+      "ln(1 + x) by Goldberg's theorem 4: within 3 ulp of StrictMath.log1p (fdlibm, < 1 ulp) for x"
+          + " from 1e-300 to 1e300 [java.lang.StrictMath as reference]")
+  void logOnePlusAgainstStrictMath() {
+    double worst = 0;
+    for (double e = -300; e <= 300; e += 0.0137) {
+      double x = Math.pow(10, e);
+      double expected = StrictMath.log1p(x);
+      worst =
+          Math.max(
+              worst,
+              Math.abs(ConsolidationCurveModel.naturalLogOnePlus(x) - expected)
+                  / Math.ulp(expected));
+    }
+    java.util.SplittableRandom random = new java.util.SplittableRandom(5);
+    for (int k = 0; k < 200_000; k++) {
+      double x = random.nextDouble() * 4;
+      double expected = StrictMath.log1p(x);
+      if (expected > 0) {
+        worst =
+            Math.max(
+                worst,
+                Math.abs(ConsolidationCurveModel.naturalLogOnePlus(x) - expected)
+                    / Math.ulp(expected));
+      }
+    }
+    assertThat(worst).as("largest error in ulp").isLessThanOrEqualTo(3);
+    assertThat(ConsolidationCurveModel.naturalLogOnePlus(0)).isZero();
+    assertThat(ConsolidationCurveModel.naturalLogOnePlus(Double.MAX_VALUE))
+        .isEqualTo(Math.log(Double.MAX_VALUE));
+  }
 }
