@@ -528,9 +528,12 @@ public final class FullCurveMethod {
   }
 
   /**
-   * Weighted least squares of (d_i, d_p, s) for a fixed c_v, under d_p &ge; 0 and s &ge; 0.
+   * Weighted least squares of (d_i, d_p, s) for a fixed c_v, under d_p &ge; 0 and s &ge; 0: one
+   * pass sums the weighted cross products of the columns (1, U, secondary shape) and the readings;
+   * each subset of free parameters is solved from those sums; the residual of the best feasible
+   * subset is then summed directly over the readings (no cancellation in the reported residual).
    *
-   * @return {d_i, d_p, s, weighted RSS}
+   * @return {d_i, d_p, s, weighted RSS}, or null if no subset is feasible
    */
   private static double[] linearFit(
       ConsolidationCurveModel model,
@@ -540,76 +543,84 @@ public final class FullCurveMethod {
       double[] w,
       boolean fitSecondary) {
     int n = t.length;
-    double[][] columns = new double[3][n];
+    double[] degree = new double[n];
+    double[] shape = new double[n];
     double[] gradient = new double[4];
     CurveParameters unit = new CurveParameters(0, 1, cv, 1);
+    // Cross products of the columns x = (1, U, shape) and of y, weighted.
+    double[][] cross = new double[3][3];
+    double[] crossY = new double[3];
+    double yy = 0;
     for (int i = 0; i < n; i++) {
       model.settlementAndGradient(t[i], unit, gradient);
-      columns[0][i] = 1.0;
-      columns[1][i] = gradient[1];
-      columns[2][i] = gradient[3];
+      degree[i] = gradient[1];
+      shape[i] = gradient[3];
+      double wi = w[i];
+      double u = gradient[1];
+      double v = gradient[3];
+      cross[0][0] += wi;
+      cross[0][1] += wi * u;
+      cross[0][2] += wi * v;
+      cross[1][1] += wi * u * u;
+      cross[1][2] += wi * u * v;
+      cross[2][2] += wi * v * v;
+      crossY[0] += wi * y[i];
+      crossY[1] += wi * u * y[i];
+      crossY[2] += wi * v * y[i];
+      yy += wi * y[i] * y[i];
     }
+    cross[1][0] = cross[0][1];
+    cross[2][0] = cross[0][2];
+    cross[2][1] = cross[1][2];
     double[] best = null;
+    double bestRss = Double.POSITIVE_INFINITY;
     // Subsets of (d_p, s) that are free; d_i is always free. Feasible solutions only.
-    boolean[][] subsets =
-        fitSecondary
-            ? new boolean[][] {{true, true}, {true, false}, {false, true}, {false, false}}
-            : new boolean[][] {{true, false}, {false, false}};
-    for (boolean[] free : subsets) {
-      double[] solution = solveSubset(columns, y, w, free);
-      if (solution == null || solution[1] < 0 || solution[2] < 0) {
+    int[][] subsets =
+        fitSecondary ? new int[][] {{0, 1, 2}, {0, 1}, {0, 2}, {0}} : new int[][] {{0, 1}, {0}};
+    for (int[] use : subsets) {
+      int m = use.length;
+      double[][] a = new double[m][m + 1];
+      for (int r = 0; r < m; r++) {
+        for (int c = 0; c < m; c++) {
+          a[r][c] = cross[use[r]][use[c]];
+        }
+        a[r][m] = crossY[use[r]];
+      }
+      double[] x = SmallFits.solve(a);
+      if (x == null) {
         continue;
       }
-      if (best == null || solution[3] < best[3]) {
+      double[] solution = new double[4];
+      double explained = 0;
+      for (int r = 0; r < m; r++) {
+        solution[use[r]] = x[r];
+        explained += x[r] * crossY[use[r]];
+      }
+      // At a least-squares solution the residual is y'Wy - x'X'Wy: used only to rank subsets.
+      double rss = yy - explained;
+      if (!(solution[1] >= 0 && solution[2] >= 0 && Double.isFinite(rss))) {
+        continue;
+      }
+      if (best == null || rss < bestRss) {
         best = solution;
+        bestRss = rss;
       }
     }
-    return best;
-  }
-
-  /** Solves the normal equations for d_i and the free ones of (d_p, s); others fixed at 0. */
-  private static double[] solveSubset(double[][] columns, double[] y, double[] w, boolean[] free) {
-    int[] use =
-        free[0] && free[1]
-            ? new int[] {0, 1, 2}
-            : free[0] ? new int[] {0, 1} : free[1] ? new int[] {0, 2} : new int[] {0};
-    int m = use.length;
-    int n = y.length;
-    double[][] a = new double[m][m + 1];
-    for (int r = 0; r < m; r++) {
-      for (int c = 0; c < m; c++) {
-        double sum = 0;
-        for (int i = 0; i < n; i++) {
-          sum += w[i] * columns[use[r]][i] * columns[use[c]][i];
-        }
-        a[r][c] = sum;
-      }
-      double sum = 0;
-      for (int i = 0; i < n; i++) {
-        sum += w[i] * columns[use[r]][i] * y[i];
-      }
-      a[r][m] = sum;
-    }
-    double[] x = SmallFits.solve(a);
-    if (x == null) {
+    if (best == null) {
       return null;
-    }
-    double[] solution = new double[4];
-    for (int r = 0; r < m; r++) {
-      solution[use[r]] = x[r];
     }
     double rss = 0;
     for (int i = 0; i < n; i++) {
-      double fitted = solution[0] + solution[1] * columns[1][i] + solution[2] * columns[2][i];
-      rss += w[i] * (y[i] - fitted) * (y[i] - fitted);
+      double r = y[i] - best[0] - best[1] * degree[i] - best[2] * shape[i];
+      rss += w[i] * r * r;
     }
-    solution[3] = rss;
-    for (double value : solution) {
-      if (!Double.isFinite(value)) {
+    for (int k = 0; k < 3; k++) {
+      if (!Double.isFinite(best[k])) {
         return null;
       }
     }
-    return solution;
+    best[3] = rss;
+    return Double.isFinite(rss) ? best : null;
   }
 
   /**

@@ -1,6 +1,7 @@
 package org.oedometry.examples.bench;
 
 import java.util.Arrays;
+import java.util.Locale;
 import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
 import org.oedometry.core.SettlementCurve;
@@ -20,6 +21,7 @@ import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
@@ -103,6 +105,50 @@ public class FullCurveBenchmark {
             weights,
             start,
             null);
+  }
+
+  /**
+   * Refinement from the same start, analytic Jacobian and fast U(T), each evaluation one streamed
+   * pass handed to Levenberg-Marquardt as p + 1 compressed rows ({@link
+   * WeightedLeastSquares#solveStreamed}).
+   *
+   * @return the solution
+   */
+  @Benchmark
+  public WeightedLeastSquares.Solution refineStreamed() {
+    ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
+    return WeightedLeastSquares.withDefaults()
+        .solveStreamed(
+            (i, p, gradient) ->
+                model.settlementAndGradient(
+                    times[i], CurveParameters.of(p[0], p[1], Math.exp(p[2]), p[3]), gradient),
+            settlements,
+            weights,
+            start,
+            null);
+  }
+
+  /** Prints the iterations and evaluations of one run of each benchmark (JMH shows it). */
+  @TearDown(Level.Trial)
+  public void printCounts() {
+    FullCurveResult whole = fullCurveFit();
+    WeightedLeastSquares.Solution analytic = refineAnalytic();
+    WeightedLeastSquares.Solution streamed = refineStreamed();
+    WeightedLeastSquares.Solution baseline = refineBaseline();
+    System.out.printf(
+        Locale.ROOT,
+        "%n%d readings: whole method %d iterations / %d evaluations (%d starts); refinement"
+            + " analytic %d / %d, streamed %d / %d, baseline %d / %d%n",
+        readings,
+        whole.iterations(),
+        whole.evaluations(),
+        whole.starts(),
+        analytic.iterations(),
+        analytic.evaluations(),
+        streamed.iterations(),
+        streamed.evaluations(),
+        baseline.iterations(),
+        baseline.evaluations());
   }
 
   /**
