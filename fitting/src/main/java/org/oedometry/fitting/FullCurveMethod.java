@@ -166,8 +166,13 @@ public final class FullCurveMethod {
     double lowest = raw[0];
     double highest = raw[0];
     for (double value : raw) {
-      lowest = Math.min(lowest, value);
-      highest = Math.max(highest, value);
+      // The readings are finite (SettlementCurve): plain comparisons suffice.
+      if (value < lowest) {
+        lowest = value;
+      }
+      if (value > highest) {
+        highest = value;
+      }
     }
     if (!(highest > lowest)) {
       throw new FitException(
@@ -522,7 +527,8 @@ public final class FullCurveMethod {
     double mean = sum / n;
     for (int i = 0; i < n; i++) {
       // A floor keeps every reading in the fit (and the weights positive).
-      w[i] = Math.max(w[i] / mean, 1e-6);
+      double normalised = w[i] / mean;
+      w[i] = normalised > 1e-6 ? normalised : 1e-6;
     }
     return w;
   }
@@ -653,20 +659,13 @@ public final class FullCurveMethod {
     int negatives = 0;
     int runs = 0;
     int previous = 0;
+    // Written without data-dependent branches: residual signs are random by design.
     for (double r : residuals) {
-      int s = r > 0 ? 1 : r < 0 ? -1 : 0;
-      if (s == 0) {
-        continue;
-      }
-      if (s > 0) {
-        positives++;
-      } else {
-        negatives++;
-      }
-      if (s != previous) {
-        runs++;
-        previous = s;
-      }
+      int s = (r > 0 ? 1 : 0) - (r < 0 ? 1 : 0);
+      positives += s > 0 ? 1 : 0;
+      negatives += s < 0 ? 1 : 0;
+      runs += s != 0 && s != previous ? 1 : 0;
+      previous = s != 0 ? s : previous;
     }
     int total = positives + negatives;
     if (positives < 2 || negatives < 2 || total < 10) {

@@ -174,6 +174,30 @@ class FullCurveMethodTest {
   }
 
   @Test
+  @DisplayName(
+      "Runs test: z = (R - mu) / sigma with mu = 2 n1 n2 / n + 1 and sigma^2 = 2 n1 n2 (2 n1 n2 -"
+          + " n) / (n^2 (n - 1)), zeros skipped [Wald & Wolfowitz 1940; NIST/SEMATECH e-Handbook"
+          + " 1.3.5.13, from memory]")
+  void runsTestFollowsTheTextbookFormula() {
+    // Signs + + - - - + - + + 0 - - + + + - (the zero is skipped): 8 runs, 8 positive, 7 negative.
+    double[] residuals = {1, 2, -1, -3, -2, 4, -1, 2, 3, 0, -2, -1, 1, 5, 2, -4};
+    double n1 = 8;
+    double n2 = 7;
+    double n = n1 + n2;
+    double mean = 2 * n1 * n2 / n + 1;
+    double variance = 2 * n1 * n2 * (2 * n1 * n2 - n) / (n * n * (n - 1));
+    assertThat(FullCurveMethod.runsTestZ(residuals))
+        .isCloseTo((8 - mean) / Math.sqrt(variance), within(1e-12));
+    double[] alternating = new double[20];
+    for (int i = 0; i < alternating.length; i++) {
+      alternating[i] = i % 2 == 0 ? 1 : -1;
+    }
+    // 20 runs of 10 + 10 against a mean of 11 and a variance of 4.74: z = 4.1.
+    assertThat(FullCurveMethod.runsTestZ(alternating)).isGreaterThan(3);
+    assertThat(FullCurveMethod.runsTestZ(new double[] {1, 1, 1, -1})).isZero();
+  }
+
+  @Test
   void rejectsBadInput() {
     SettlementCurve few =
         SettlementCurve.of(
