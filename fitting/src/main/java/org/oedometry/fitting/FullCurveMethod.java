@@ -28,10 +28,11 @@ import org.oedometry.theory.CurveParameters;
  *   <li>Weights ({@link FullCurveOptions.ReadingWeights}): by default each reading weighs the span
  *       of log t it represents, normalised to a mean of 1.
  *   <li>Grouping (data loggers): above 400 readings the search of the next step runs on 100 equal
- *       bins of log t, each bin's readings replaced by their weighted mean time and settlement with
- *       the bin's total weight (see {@code ReadingGroups}: the grouped objective differs from the
- *       full one by a term that hardly depends on the parameters). Up to the limit every reading is
- *       its own group.
+ *       bins of log t, each bin's readings represented by two points that carry their weighted
+ *       mean, spread and within-bin slope (see {@code ReadingGroups}: the grouped sum of squares
+ *       then depends on the parameters as the sum over every reading does, up to terms of third
+ *       order in the bin width); the profile and the constructions, which only give start values,
+ *       use the bins' weighted means. Up to the limit every reading is its own group.
  *   <li>Starts: for 31 trial values of c<sub>v</sub>, log-spaced so that T at the last reading runs
  *       from 0.02 to 20 000, the model is linear in (d<sub>i</sub>, d<sub>p</sub>, s) and is solved
  *       exactly under d<sub>p</sub> &ge; 0, s &ge; 0 (a profile of the residual over c<sub>v
@@ -46,10 +47,10 @@ import org.oedometry.theory.CurveParameters;
  *   <li>Every reading: when the readings were grouped, the best grouped fit is finished on every
  *       reading by Gauss-Newton steps, one pass over the readings each, until the optimum of the
  *       weighted least squares over all readings is nearer than 0.01 standard errors (Levenberg-
- *       Marquardt takes over if a step fails); typically one or two passes. The reported fit is
- *       therefore the fit to every reading, to well within its statistical uncertainty (tested
- *       against Levenberg-Marquardt on all readings). Iterations and evaluations count those of the
- *       best start plus these steps and passes.
+ *       Marquardt takes over if a step fails); the grouped optimum usually passes this check at
+ *       once, so one pass. The reported fit is therefore the fit to every reading, to well within
+ *       its statistical uncertainty (tested against Levenberg-Marquardt on all readings).
+ *       Iterations and evaluations count those of the best start plus these steps and passes.
  *   <li>Interval: the standard error of ln c<sub>v</sub> from the covariance of the parameters,
  *       with the readings' noise variance estimated from the unweighted residuals (&Sigma;r<sup>2
  *       </sup>/(n - p)), by the sandwich A<sup>-1</sup>BA<sup>-1</sup> (A = J<sup>T</sup>WJ, B =
@@ -196,10 +197,12 @@ public final class FullCurveMethod {
     // 1. Many readings are grouped into log-time bins for the search (start values, profile and
     // the multi-start Levenberg-Marquardt); the fit is then finished on every reading.
     final ReadingGroups groups = ReadingGroups.of(t, y, w, GROUPING_LIMIT, GROUPS);
-    final double[] profileTimes = groups.times();
-    final double[] profileY = groups.settlements();
-    final double[] profileWeights = groups.weights();
-    // Profile of the residual over trial c_v, linear parameters solved exactly.
+    final double[] profileTimes = groups.meanTimes();
+    final double[] profileY = groups.meanSettlements();
+    final double[] profileWeights = groups.meanWeights();
+    final double[] groupTimes = groups.times();
+    // Profile of the residual over trial c_v, linear parameters solved exactly, on the bin means
+    // (start values only).
     double[] profileLogCv = new double[PROFILE_POINTS];
     double[] profileRss = new double[PROFILE_POINTS];
     double[][] profileLinear = new double[PROFILE_POINTS][];
@@ -238,7 +241,7 @@ public final class FullCurveMethod {
               new CurveParameters(p[0], p[1], Math.exp(p[2]), parameterCount == 4 ? p[3] : 0.0);
           double[] full = new double[4];
           for (int i = 0; i < values.length; i++) {
-            values[i] = model.settlementAndGradient(profileTimes[i], parameters, full);
+            values[i] = model.settlementAndGradient(groupTimes[i], parameters, full);
             System.arraycopy(full, 0, jacobian[i], 0, parameterCount);
           }
         };
@@ -278,7 +281,7 @@ public final class FullCurveMethod {
     for (double[] start : starts) {
       try {
         WeightedLeastSquares.Solution solution =
-            solver.solve(groupModel, profileY, profileWeights, start, bounds);
+            solver.solve(groupModel, groups.settlements(), groups.weights(), start, bounds);
         reachedLogCv.add(solution.parameters()[2]);
         if (best == null
             || solution.weightedResidualSumOfSquares() < best.weightedResidualSumOfSquares()) {

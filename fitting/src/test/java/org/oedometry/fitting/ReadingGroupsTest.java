@@ -23,14 +23,16 @@ class ReadingGroupsTest {
     assertThat(groups.times()).containsExactly(t);
     assertThat(groups.settlements()).containsExactly(y);
     assertThat(groups.weights()).containsExactly(w);
+    assertThat(groups.meanTimes()).containsExactly(t);
     SettlementCurve curve = SettlementCurve.of(new double[] {0, 1, 2, 4, 8}, new double[5]);
     assertThat(groups.asCurve(curve, 1, 1.0)).isSameAs(curve);
   }
 
   @Test
   @DisplayName(
-      "Each reading falls in bin floor(B log(t/t_1) / log(t_n/t_1)) and each group holds the"
-          + " weighted means of its readings [direct computation with logarithms]")
+      "Each reading falls in bin floor(B log(t/t_1) / log(t_n/t_1)); each bin becomes the two"
+          + " points t_mean -/+ sigma on the bin's weighted least-squares line, weight W/2 each"
+          + " [direct computation with logarithms and textbook weighted regression]")
   void groupsByLogTime() {
     int n = 3000;
     int bins = 40;
@@ -43,15 +45,25 @@ class ReadingGroupsTest {
       y[i] = Math.log(t[i]) + 0.01 * random.nextDouble();
       w[i] = 0.5 + random.nextDouble();
     }
+    int[] binOf = new int[n];
     double[] sum = new double[bins];
     double[] sumT = new double[bins];
     double[] sumY = new double[bins];
     double span = Math.log(t[n - 1] / t[0]);
     for (int i = 0; i < n; i++) {
       int b = (int) Math.min(bins - 1, Math.floor(bins * Math.log(t[i] / t[0]) / span));
+      binOf[i] = b;
       sum[b] += w[i];
       sumT[b] += w[i] * t[i];
       sumY[b] += w[i] * y[i];
+    }
+    double[] stt = new double[bins];
+    double[] sty = new double[bins];
+    for (int i = 0; i < n; i++) {
+      int b = binOf[i];
+      double dt = t[i] - sumT[b] / sum[b];
+      stt[b] += w[i] * dt * dt;
+      sty[b] += w[i] * dt * (y[i] - sumY[b] / sum[b]);
     }
     ReadingGroups groups = ReadingGroups.of(t, y, w, 100, bins);
     assertThat(groups.grouped()).isTrue();
@@ -60,12 +72,35 @@ class ReadingGroupsTest {
       if (sum[b] == 0) {
         continue;
       }
-      assertThat(groups.weights()[k]).isCloseTo(sum[b], within(1e-9 * sum[b]));
-      assertThat(groups.times()[k]).isCloseTo(sumT[b] / sum[b], within(1e-9 * sumT[b] / sum[b]));
-      assertThat(groups.settlements()[k]).isCloseTo(sumY[b] / sum[b], within(1e-9));
-      k++;
+      double meanT = sumT[b] / sum[b];
+      double meanY = sumY[b] / sum[b];
+      if (stt[b] == 0) {
+        assertThat(groups.weights()[k]).isCloseTo(sum[b], within(1e-9 * sum[b]));
+        assertThat(groups.times()[k]).isCloseTo(meanT, within(1e-9 * meanT));
+        k++;
+        continue;
+      }
+      double sigma = Math.sqrt(stt[b] / sum[b]);
+      double slope = sty[b] / stt[b];
+      for (int side = -1; side <= 1; side += 2) {
+        assertThat(groups.weights()[k]).isCloseTo(sum[b] / 2, within(1e-9 * sum[b]));
+        assertThat(groups.times()[k]).isCloseTo(meanT + side * sigma, within(1e-9 * meanT));
+        assertThat(groups.settlements()[k]).isCloseTo(meanY + side * slope * sigma, within(1e-9));
+        k++;
+      }
     }
     assertThat(groups.times()).hasSize(k);
+    int m = 0;
+    for (int b = 0; b < bins; b++) {
+      if (sum[b] > 0) {
+        assertThat(groups.meanWeights()[m]).isCloseTo(sum[b], within(1e-9 * sum[b]));
+        assertThat(groups.meanTimes()[m])
+            .isCloseTo(sumT[b] / sum[b], within(1e-9 * sumT[b] / sum[b]));
+        assertThat(groups.meanSettlements()[m]).isCloseTo(sumY[b] / sum[b], within(1e-9));
+        m++;
+      }
+    }
+    assertThat(groups.meanTimes()).hasSize(m);
   }
 
   @Test
@@ -100,7 +135,7 @@ class ReadingGroupsTest {
               }
               assertThat(groupTotal).isCloseTo(total, within(1e-9 * total));
               assertThat(groupTime).isCloseTo(weightedTime, within(1e-9 * weightedTime));
-              assertThat(groups.times().length).isLessThanOrEqualTo(bins);
+              assertThat(groups.times().length).isLessThanOrEqualTo(2 * bins);
               double[] curveTimes = new double[n + 1];
               double[] curveSettlements = new double[n + 1];
               curveSettlements[0] = 0.25;
@@ -112,7 +147,8 @@ class ReadingGroupsTest {
                   groups.asCurve(SettlementCurve.of(curveTimes, curveSettlements), 1, -1.0);
               assertThat(curve.settlementMetres()[0]).isEqualTo(0.25);
               assertThat(curve.elapsedSeconds()[0]).isZero();
-              assertThat(curve.settlementMetres()[1]).isEqualTo(-groups.settlements()[0]);
+              assertThat(curve.settlementMetres()[1]).isEqualTo(-groups.meanSettlements()[0]);
+              assertThat(curve.size()).isEqualTo(groups.meanTimes().length + 1);
             });
   }
 }
