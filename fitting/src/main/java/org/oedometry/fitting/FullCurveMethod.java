@@ -281,7 +281,14 @@ public final class FullCurveMethod {
     for (double[] start : starts) {
       try {
         WeightedLeastSquares.Solution solution =
-            solver.solve(groupModel, groups.settlements(), groups.weights(), start, bounds);
+            groups.grouped()
+                ? solver.solveStreamed(
+                    new CurvePoints(model, groupTimes, parameterCount),
+                    groups.settlements(),
+                    groups.weights(),
+                    start,
+                    bounds)
+                : solver.solve(groupModel, groups.settlements(), groups.weights(), start, bounds);
         reachedLogCv.add(solution.parameters()[2]);
         if (best == null
             || solution.weightedResidualSumOfSquares() < best.weightedResidualSumOfSquares()) {
@@ -301,24 +308,7 @@ public final class FullCurveMethod {
     final double searchLogCv = best.parameters()[2];
     if (groups.grouped()) {
       // Finish on every reading from the best grouped fit.
-      final CurveParameters[] current = new CurveParameters[1];
-      final double[][] currentFor = new double[1][];
-      final double[] scratch = new double[4];
-      WeightedLeastSquares.PointModel readingModel =
-          (index, q, gradient) -> {
-            if (q != currentFor[0]) {
-              // One parameter vector per pass over the readings: build its values once.
-              currentFor[0] = q;
-              current[0] =
-                  new CurveParameters(q[0], q[1], Math.exp(q[2]), parameterCount == 4 ? q[3] : 0.0);
-            }
-            if (parameterCount == 4) {
-              return model.settlementAndGradient(t[index], current[0], gradient);
-            }
-            double value = model.settlementAndGradient(t[index], current[0], scratch);
-            System.arraycopy(scratch, 0, gradient, 0, parameterCount);
-            return value;
-          };
+      WeightedLeastSquares.PointModel readingModel = new CurvePoints(model, t, parameterCount);
       best =
           solver.refineStreamed(
               readingModel, y, w, best.parameters(), bounds, REFINEMENT_STANDARD_ERRORS);
@@ -480,6 +470,40 @@ public final class FullCurveMethod {
         endFactor,
         plotted,
         warnings);
+  }
+
+  /**
+   * The curve model at given times as a point model for the streamed solver, with the curve's
+   * parameters built once per parameter vector (the solver passes the same array for a whole pass).
+   * Confined to one fit, on one thread.
+   */
+  private static final class CurvePoints implements WeightedLeastSquares.PointModel {
+    private final ConsolidationCurveModel model;
+    private final double[] times;
+    private final int parameterCount;
+    private final double[] scratch = new double[ConsolidationCurveModel.PARAMETER_COUNT];
+    private double[] builtFor;
+    private CurveParameters built;
+
+    CurvePoints(ConsolidationCurveModel model, double[] times, int parameterCount) {
+      this.model = model;
+      this.times = times;
+      this.parameterCount = parameterCount;
+    }
+
+    @Override
+    public double valueAndGradient(int index, double[] q, double[] gradient) {
+      if (q != builtFor) {
+        builtFor = q;
+        built = new CurveParameters(q[0], q[1], Math.exp(q[2]), parameterCount == 4 ? q[3] : 0.0);
+      }
+      if (parameterCount == 4) {
+        return model.settlementAndGradient(times[index], built, gradient);
+      }
+      double value = model.settlementAndGradient(times[index], built, scratch);
+      System.arraycopy(scratch, 0, gradient, 0, parameterCount);
+      return value;
+    }
   }
 
   /** A start (d_i, d_p, ln c_v[, s]) from a linear solution {d_i, d_p, s, rss}. */
