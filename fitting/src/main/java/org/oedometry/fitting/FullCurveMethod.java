@@ -162,11 +162,15 @@ public final class FullCurveMethod {
                   + " at least %d)",
               n, parameterCount, parameterCount + 2));
     }
-    final double[] t = Arrays.copyOfRange(allTimes, first, allTimes.length);
-    final double[] raw = Arrays.copyOfRange(allSettlements, first, allSettlements.length);
-    double lowest = raw[0];
-    double highest = raw[0];
-    for (double value : raw) {
+    // The curve's accessors return copies already: copy again only to drop a zero reading.
+    final double[] t = first == 0 ? allTimes : Arrays.copyOfRange(allTimes, first, allTimes.length);
+    final double[] y =
+        first == 0
+            ? allSettlements
+            : Arrays.copyOfRange(allSettlements, first, allSettlements.length);
+    double lowest = y[0];
+    double highest = y[0];
+    for (double value : y) {
       // The readings are finite (SettlementCurve): plain comparisons suffice.
       if (value < lowest) {
         lowest = value;
@@ -178,13 +182,15 @@ public final class FullCurveMethod {
     if (!(highest > lowest)) {
       throw new FitException(
           "the readings do not move (every settlement is "
-              + raw[0]
+              + y[0]
               + " m): there is no consolidation to fit");
     }
-    final double sign = raw[n - 1] >= raw[0] ? 1.0 : -1.0;
-    final double[] y = new double[n];
-    for (int i = 0; i < n; i++) {
-      y[i] = sign * raw[i];
+    final double sign = y[n - 1] >= y[0] ? 1.0 : -1.0;
+    if (sign < 0) {
+      // Fitted on the magnitude (the array is this method's own copy).
+      for (int i = 0; i < n; i++) {
+        y[i] = -y[i];
+      }
     }
     final double[] w = weights(t, options.weights());
     final ConsolidationCurveModel model =
@@ -682,17 +688,42 @@ public final class FullCurveMethod {
 
   /** z statistic of the Wald-Wolfowitz runs test on the residuals' signs (0 if too few). */
   static double runsTestZ(double[] residuals) {
-    int positives = 0;
     int negatives = 0;
-    int runs = 0;
-    int previous = 0;
-    // Written without data-dependent branches: residual signs are random by design.
+    int changes = 0;
+    int zeros = 0;
+    int previous = -1;
+    // Residual signs are random by design: count with bit arithmetic, not branches. A residual of
+    // exactly zero (rare) is skipped by the slower loop below.
     for (double r : residuals) {
-      int s = (r > 0 ? 1 : 0) - (r < 0 ? 1 : 0);
-      positives += s > 0 ? 1 : 0;
-      negatives += s < 0 ? 1 : 0;
-      runs += s != 0 && s != previous ? 1 : 0;
-      previous = s != 0 ? s : previous;
+      long bits = Double.doubleToRawLongBits(r);
+      int negative = (int) (bits >>> 63);
+      zeros += (bits << 1) == 0 ? 1 : 0;
+      negatives += negative;
+      changes += previous < 0 ? 0 : negative ^ previous;
+      previous = negative;
+    }
+    int positives = residuals.length - negatives;
+    int runs = residuals.length == 0 ? 0 : changes + 1;
+    if (zeros > 0) {
+      positives = 0;
+      negatives = 0;
+      runs = 0;
+      int sign = 0;
+      for (double r : residuals) {
+        int s = r > 0 ? 1 : r < 0 ? -1 : 0;
+        if (s == 0) {
+          continue;
+        }
+        if (s > 0) {
+          positives++;
+        } else {
+          negatives++;
+        }
+        if (s != sign) {
+          runs++;
+          sign = s;
+        }
+      }
     }
     int total = positives + negatives;
     if (positives < 2 || negatives < 2 || total < 10) {

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
+import static org.quicktheories.generators.SourceDSL.integers;
 import static org.quicktheories.generators.SourceDSL.longs;
 
 import java.util.SplittableRandom;
@@ -105,6 +106,49 @@ class FullCurveMethodProperties {
               } catch (FitException e) {
                 assertThat(e.getMessage()).isNotBlank();
               }
+            });
+  }
+
+  @Test
+  @DisplayName(
+      "Runs test: the branch-free count equals a plain sign-by-sign count for any residuals,"
+          + " zeros included [Wald & Wolfowitz runs, counted directly]")
+  void runsTestCountsLikeAPlainLoop() {
+    qt().withFixedSeed(SEED)
+        .withExamples(300)
+        .forAll(integers().between(0, 60), longs().all(), integers().between(0, 3))
+        .checkAssert(
+            (n, seed, zeroEvery) -> {
+              SplittableRandom random = new SplittableRandom(seed);
+              double[] r = new double[n];
+              for (int i = 0; i < n; i++) {
+                r[i] =
+                    zeroEvery > 0 && random.nextInt(10) < zeroEvery ? 0.0 : random.nextGaussian();
+              }
+              int positives = 0;
+              int negatives = 0;
+              int runs = 0;
+              int last = 0;
+              for (double value : r) {
+                int s = (int) Math.signum(value);
+                if (s == 0) {
+                  continue;
+                }
+                positives += s > 0 ? 1 : 0;
+                negatives += s < 0 ? 1 : 0;
+                runs += s != last ? 1 : 0;
+                last = s;
+              }
+              int total = positives + negatives;
+              double expected = 0.0;
+              if (positives >= 2 && negatives >= 2 && total >= 10) {
+                double product = 2.0 * positives * negatives;
+                double mean = product / total + 1;
+                double variance =
+                    product * (product - total) / ((double) total * total * (total - 1));
+                expected = (runs - mean) / Math.sqrt(variance);
+              }
+              assertThat(FullCurveMethod.runsTestZ(r)).isCloseTo(expected, within(1e-12));
             });
   }
 }

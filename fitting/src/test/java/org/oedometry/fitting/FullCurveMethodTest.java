@@ -195,6 +195,12 @@ class FullCurveMethodTest {
     // 20 runs of 10 + 10 against a mean of 11 and a variance of 4.74: z = 4.1.
     assertThat(FullCurveMethod.runsTestZ(alternating)).isGreaterThan(3);
     assertThat(FullCurveMethod.runsTestZ(new double[] {1, 1, 1, -1})).isZero();
+    // Without the zero (and with -0.0, which is no sign either) the count must be the same.
+    double[] noZero = {1, 2, -1, -3, -2, 4, -1, 2, 3, -2, -1, 1, 5, 2, -4};
+    double[] negativeZero = {1, 2, -1, -3, -2, 4, -1, 2, 3, -0.0, -2, -1, 1, 5, 2, -4};
+    assertThat(FullCurveMethod.runsTestZ(noZero)).isEqualTo(FullCurveMethod.runsTestZ(residuals));
+    assertThat(FullCurveMethod.runsTestZ(negativeZero))
+        .isEqualTo(FullCurveMethod.runsTestZ(residuals));
   }
 
   @Test

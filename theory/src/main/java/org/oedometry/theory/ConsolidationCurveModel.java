@@ -148,12 +148,13 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
       timeTimesRate = t * gradient[0];
     }
     final double ratio = t / secondaryOnset;
-    final double secondaryShape = secondaryShape(t);
+    final double onePlusRatio = 1.0 + ratio;
+    final double secondaryShape = naturalLogOnePlus(ratio) / LN_10;
     gradient[0] = 1.0;
     gradient[1] = degree;
     gradient[2] =
         parameters.primarySettlement() * timeTimesRate
-            + parameters.secondarySlope() * ratio / ((1.0 + ratio) * LN_10);
+            + parameters.secondarySlope() * ratio / (onePlusRatio * LN_10);
     gradient[3] = secondaryShape;
     return parameters.initialSettlement()
         + parameters.primarySettlement() * degree
