@@ -117,11 +117,18 @@ public class FullCurveBenchmark {
   @Benchmark
   public WeightedLeastSquares.Solution refineStreamed() {
     ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
+    // The curve's parameters are built once per pass (the solver passes one array per pass).
+    double[][] builtFor = new double[1][];
+    CurveParameters[] built = new CurveParameters[1];
     return WeightedLeastSquares.withDefaults()
         .solveStreamed(
-            (i, p, gradient) ->
-                model.settlementAndGradient(
-                    times[i], CurveParameters.of(p[0], p[1], Math.exp(p[2]), p[3]), gradient),
+            (i, p, gradient) -> {
+              if (p != builtFor[0]) {
+                builtFor[0] = p;
+                built[0] = CurveParameters.of(p[0], p[1], Math.exp(p[2]), p[3]);
+              }
+              return model.settlementAndGradient(times[i], built[0], gradient);
+            },
             settlements,
             weights,
             start,
