@@ -644,6 +644,11 @@ public final class FullCurveMethod {
         best = solution;
         bestRss = rss;
       }
+      if (use.length == subsets[0].length) {
+        // The unconstrained solution is feasible: it is the least-squares optimum, and no subset
+        // with parameters held at 0 can do better.
+        break;
+      }
     }
     if (best == null) {
       return null;
