@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.List;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -154,6 +155,95 @@ class FullCurveMethodTest {
               / new org.apache.commons.math3.distribution.TDistribution(null, t.length - 4)
                   .inverseCumulativeProbability(0.975);
       assertThat(resultError).isBetween(0.99 * sandwich, 1.1 * sandwich);
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Many readings, every option: with a zero reading, swelling, unit weights, no secondary"
+          + " term or another secondary onset, the grouped fit is within 0.01 standard errors of"
+          + " Levenberg-Marquardt on every reading [plain Commons Math Levenberg-Marquardt on every"
+          + " reading as reference]")
+  void groupedFitMatchesFitOnEveryReadingForEveryOption() {
+    SplittableRandom random = new SplittableRandom(91);
+    CurveParameters truth = CurveParameters.of(0.012e-3, 0.400e-3, 2.5 / YEAR, 0.015e-3);
+    double[] logger = loggerSchedule();
+    SettlementCurve plainCurve = curve(logger, truth, 1e-6, random);
+    double[] withZeroTimes = new double[logger.length + 1];
+    double[] withZeroSettlements = new double[logger.length + 1];
+    System.arraycopy(logger, 0, withZeroTimes, 1, logger.length);
+    System.arraycopy(plainCurve.settlementMetres(), 0, withZeroSettlements, 1, logger.length);
+    withZeroSettlements[0] = 0.004e-3;
+    double[] swelling = plainCurve.settlementMetres();
+    for (int i = 0; i < swelling.length; i++) {
+      swelling[i] = -swelling[i];
+    }
+    record Case(String name, SettlementCurve curve, FullCurveOptions options) {}
+    FullCurveOptions defaults = FullCurveOptions.defaults();
+    List<Case> cases =
+        List.of(
+            new Case(
+                "zero reading", SettlementCurve.of(withZeroTimes, withZeroSettlements), defaults),
+            new Case("swelling", SettlementCurve.of(logger, swelling), defaults),
+            new Case(
+                "unit weights",
+                plainCurve,
+                defaults.withWeights(FullCurveOptions.ReadingWeights.UNIT)),
+            new Case("no secondary term", plainCurve, defaults.withSecondary(false)),
+            new Case("secondary onset 1", plainCurve, defaults.withSecondaryOnset(1.0)));
+    for (Case c : cases) {
+      FullCurveResult fit = FullCurveMethod.fit(c.curve(), DRAINAGE_PATH, c.options());
+      double[] all = c.curve().elapsedSeconds();
+      double[] ally = c.curve().settlementMetres();
+      int first = all[0] == 0 ? 1 : 0;
+      double[] t = java.util.Arrays.copyOfRange(all, first, all.length);
+      double[] y = java.util.Arrays.copyOfRange(ally, first, ally.length);
+      double sign = y[y.length - 1] >= y[0] ? 1 : -1;
+      for (int i = 0; i < y.length; i++) {
+        y[i] *= sign;
+      }
+      double[] w = FullCurveMethod.weights(t, c.options().weights());
+      ConsolidationCurveModel model =
+          new ConsolidationCurveModel(DRAINAGE_PATH, c.options().secondaryOnset());
+      int p = c.options().fitSecondary() ? 4 : 3;
+      double[] start =
+          p == 4
+              ? new double[] {0, 0.3e-3, Math.log(truth.cv()), 0.01e-3}
+              : new double[] {0, 0.3e-3, Math.log(truth.cv())};
+      WeightedLeastSquares.Solution reference =
+          WeightedLeastSquares.withDefaults()
+              .solve(
+                  ((WeightedLeastSquares.PointModel)
+                          (i, q, g) -> {
+                            double[] full = new double[4];
+                            double value =
+                                model.settlementAndGradient(
+                                    t[i],
+                                    CurveParameters.of(
+                                        q[0], q[1], Math.exp(q[2]), p == 4 ? q[3] : 0.0),
+                                    full);
+                            System.arraycopy(full, 0, g, 0, p);
+                            return value;
+                          })
+                      .asModel(),
+                  y,
+                  w,
+                  start,
+                  null);
+      double[] q = reference.parameters();
+      double[] se = reference.standardErrors();
+      double[] fitted = {
+        sign * fit.d0(),
+        sign * (fit.d100() - fit.d0()),
+        Math.log(fit.cv()),
+        sign * fit.secondarySlope()
+      };
+      for (int j = 0; j < p; j++) {
+        assertThat(Math.abs(fitted[j] - q[j]))
+            .as("%s: parameter %d against %s standard errors", c.name(), j, se[j])
+            .isLessThanOrEqualTo(0.01 * se[j] + 1e-12 * Math.abs(q[j]));
+      }
+      assertThat(fit.residuals()).as(c.name()).hasSize(t.length);
     }
   }
 
