@@ -32,7 +32,8 @@ import org.oedometry.theory.CurveParameters;
  *       mean, spread and within-bin slope (see {@code ReadingGroups}: the grouped sum of squares
  *       then depends on the parameters as the sum over every reading does, up to terms of third
  *       order in the bin width); the profile and the constructions, which only give start values,
- *       use the bins' weighted means. Up to the limit every reading is its own group.
+ *       use the weighted means of coarser bins (three bins merged, about 8 a decade of time). Up to
+ *       the limit every reading is its own group.
  *   <li>Starts: for 31 trial values of c<sub>v</sub>, log-spaced so that T at the last reading runs
  *       from 0.02 to 20 000, the model is linear in (d<sub>i</sub>, d<sub>p</sub>, s) and is solved
  *       exactly under d<sub>p</sub> &ge; 0, s &ge; 0 (a profile of the residual over c<sub>v
@@ -96,6 +97,9 @@ public final class FullCurveMethod {
 
   /** Number of equal log-time bins the readings are grouped into above the limit. */
   static final int GROUPS = 100;
+
+  /** Bins merged for the means that give start values (34 means from 100 bins). */
+  static final int GROUPS_MERGED = 3;
 
   /**
    * The fit on every reading is finished when the optimum is nearer than this many standard errors
@@ -202,7 +206,7 @@ public final class FullCurveMethod {
 
     // 1. Many readings are grouped into log-time bins for the search (start values, profile and
     // the multi-start Levenberg-Marquardt); the fit is then finished on every reading.
-    final ReadingGroups groups = ReadingGroups.of(t, y, w, GROUPING_LIMIT, GROUPS);
+    final ReadingGroups groups = ReadingGroups.of(t, y, w, GROUPING_LIMIT, GROUPS, GROUPS_MERGED);
     final double[] profileTimes = groups.meanTimes();
     final double[] profileY = groups.meanSettlements();
     final double[] profileWeights = groups.meanWeights();

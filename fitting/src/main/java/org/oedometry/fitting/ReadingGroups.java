@@ -23,6 +23,11 @@ import org.oedometry.core.SettlementCurve;
  * the grouped optimum lay within 0.003 standard errors of the optimum over all readings (means
  * alone, without the slope term, were up to 1.4 standard errors off).
  *
+ * <p>For start values only (the profile over c<sub>v</sub> and the constructions), the weighted
+ * means of coarser bins, a few consecutive bins merged, stand for the readings: about as many as
+ * the usual lab schedule has per decade of time, enough to find starts and cheaper than the fine
+ * bins.
+ *
  * <p>With no more readings than the limit, the groups are the readings themselves. Immutable.
  */
 final class ReadingGroups {
@@ -53,9 +58,10 @@ final class ReadingGroups {
    * @param w weights, &gt; 0
    * @param limit up to this many readings are kept as they are
    * @param bins number of equal log-time bins above the limit
+   * @param merge the means for start values are taken over this many consecutive bins; &ge; 1
    * @return the groups
    */
-  static ReadingGroups of(double[] t, double[] y, double[] w, int limit, int bins) {
+  static ReadingGroups of(double[] t, double[] y, double[] w, int limit, int bins, int merge) {
     int n = t.length;
     if (n <= limit) {
       double[][] readings = {t.clone(), y.clone(), w.clone()};
@@ -105,19 +111,32 @@ final class ReadingGroups {
     double[] settlements = new double[2 * bins];
     double[] weights = new double[2 * bins];
     int count = 0;
+    // Means of coarse bins (merge consecutive bins each) for the start values.
     double[] means = new double[bins];
     double[] meanWeights = new double[bins];
     double[] binTimes = new double[bins];
     int binCount = 0;
+    for (int b = 0; b < bins; b += merge) {
+      double coarseWeight = 0;
+      double coarseTime = 0;
+      double coarseSettlement = 0;
+      for (int f = b; f < Math.min(bins, b + merge); f++) {
+        coarseWeight += weightSum[f];
+        coarseTime += weightedTime[f];
+        coarseSettlement += weightedSettlement[f];
+      }
+      if (coarseWeight > 0) {
+        binTimes[binCount] = coarseTime / coarseWeight;
+        means[binCount] = coarseSettlement / coarseWeight;
+        meanWeights[binCount] = coarseWeight;
+        binCount++;
+      }
+    }
     double previous = Double.NEGATIVE_INFINITY;
     for (int b = 0; b < bins; b++) {
       if (!(weightSum[b] > 0)) {
         continue;
       }
-      binTimes[binCount] = meanTime[b];
-      means[binCount] = meanSettlement[b];
-      meanWeights[binCount] = weightSum[b];
-      binCount++;
       double spread = Math.sqrt(timeSquares[b] / weightSum[b]);
       double early = meanTime[b] - spread;
       double late = meanTime[b] + spread;
@@ -174,17 +193,20 @@ final class ReadingGroups {
     return weights;
   }
 
-  /** Weighted mean time of each non-empty bin, s (the readings if not grouped; read only). */
+  /**
+   * Weighted mean time of each non-empty coarse bin (consecutive bins merged), s; the readings if
+   * not grouped (read only).
+   */
   double[] meanTimes() {
     return meanTimes;
   }
 
-  /** Weighted mean settlement of each non-empty bin, m, fitting sign (read only). */
+  /** Weighted mean settlement of each non-empty coarse bin, m, fitting sign (read only). */
   double[] meanSettlements() {
     return meanSettlements;
   }
 
-  /** Total weight of each non-empty bin (read only). */
+  /** Total weight of each non-empty coarse bin (read only). */
   double[] meanWeights() {
     return meanWeights;
   }
