@@ -632,6 +632,7 @@ public final class WeightedLeastSquares {
     final double[][] squaredWeightMatrix;
     final double[] gradient;
     final double weightedSquares;
+    private Scaled decomposed;
 
     private Pass(
         double[] parameters,
@@ -773,8 +774,18 @@ public final class WeightedLeastSquares {
       return new Pass(parameters, residuals, a, b, Arrays.copyOf(fullG, p), c);
     }
 
-    /** Eigen-decomposition of the normal matrix scaled to unit diagonal: {scale, values, V}. */
-    private Object[] decomposition() {
+    /**
+     * Eigen-decomposition of the normal matrix scaled to unit diagonal, computed once per pass (a
+     * pass is confined to the thread of one fit).
+     */
+    private Scaled decomposition() {
+      if (decomposed == null) {
+        decomposed = decompose();
+      }
+      return decomposed;
+    }
+
+    private Scaled decompose() {
       int p = parameters.length;
       double[] scale = new double[p];
       double[][] scaled = new double[p][p];
@@ -797,16 +808,16 @@ public final class WeightedLeastSquares {
           values[k] = 0.0;
         }
       }
-      return new Object[] {scale, values, eigen.getV().getData()};
+      return new Scaled(scale, values, eigen.getV().getData());
     }
 
     /** The p + 1 compressed rows (negated residuals as values, target 0) for the optimiser. */
     Pair<RealVector, RealMatrix> compressed() {
       int p = parameters.length;
-      Object[] parts = decomposition();
-      double[] scale = (double[]) parts[0];
-      double[] values = (double[]) parts[1];
-      double[][] v = (double[][]) parts[2];
+      Scaled parts = decomposition();
+      double[] scale = parts.scale();
+      double[] values = parts.values();
+      double[][] v = parts.vectors();
       double[][] rows = new double[p + 1][p];
       double[] negated = new double[p + 1];
       double explained = 0;
@@ -828,10 +839,10 @@ public final class WeightedLeastSquares {
     /** The Gauss-Newton step A<sup>+</sup>g (directions of negligible eigenvalue not moved). */
     double[] newtonStep() {
       int p = parameters.length;
-      Object[] parts = decomposition();
-      double[] scale = (double[]) parts[0];
-      double[] values = (double[]) parts[1];
-      double[][] v = (double[][]) parts[2];
+      Scaled parts = decomposition();
+      double[] scale = parts.scale();
+      double[] values = parts.values();
+      double[][] v = parts.vectors();
       double[] step = new double[p];
       for (int k = 0; k < p; k++) {
         if (values[k] == 0.0) {
@@ -852,10 +863,10 @@ public final class WeightedLeastSquares {
     /** A<sup>-1</sup> from the scaled eigen-decomposition; FitException if singular. */
     double[][] inverseNormalMatrix() {
       int p = parameters.length;
-      Object[] parts = decomposition();
-      double[] scale = (double[]) parts[0];
-      double[] values = (double[]) parts[1];
-      double[][] v = (double[][]) parts[2];
+      Scaled parts = decomposition();
+      double[] scale = parts.scale();
+      double[] values = parts.values();
+      double[][] v = parts.vectors();
       double[][] inverse = new double[p][p];
       for (int k = 0; k < p; k++) {
         if (values[k] == 0.0) {
@@ -915,6 +926,12 @@ public final class WeightedLeastSquares {
       }
     }
   }
+
+  /**
+   * A normal matrix A = D A' D with D = diag(scale) and A' = V diag(values) V<sup>T</sup>,
+   * eigenvalues below the negligible fraction set to 0.
+   */
+  private record Scaled(double[] scale, double[] values, double[][] vectors) {}
 
   /** Thrown inside the optimiser when the model leaves the finite numbers. */
   private static final class NonFiniteModelException extends RuntimeException {
