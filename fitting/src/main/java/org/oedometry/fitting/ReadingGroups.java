@@ -75,42 +75,56 @@ final class ReadingGroups {
       upperEdge[b] = Math.pow(10, low + span * (b + 1) / bins);
     }
     upperEdge[bins - 1] = Double.POSITIVE_INFINITY;
+    // The readings of bin b are firstOfBin[b] .. firstOfBin[b + 1] - 1.
+    int[] firstOfBin = new int[bins + 1];
+    int next = 0;
+    for (int b = 0; b < bins; b++) {
+      firstOfBin[b] = next;
+      while (next < n && t[next] < upperEdge[b]) {
+        next++;
+      }
+    }
+    firstOfBin[bins] = n;
     double[] weightSum = new double[bins];
     double[] weightedTime = new double[bins];
     double[] weightedSettlement = new double[bins];
-    int bin = 0;
-    for (int i = 0; i < n; i++) {
-      while (t[i] >= upperEdge[bin]) {
-        bin++;
-      }
-      weightSum[bin] += w[i];
-      weightedTime[bin] += w[i] * t[i];
-      weightedSettlement[bin] += w[i] * y[i];
-    }
     double[] meanTime = new double[bins];
     double[] meanSettlement = new double[bins];
-    for (int b = 0; b < bins; b++) {
-      if (weightSum[b] > 0) {
-        meanTime[b] = weightedTime[b] / weightSum[b];
-        meanSettlement[b] = weightedSettlement[b] / weightSum[b];
-      }
-    }
-    // Second pass: spread of time and its co-variation with settlement about the bin means.
     double[] timeSquares = new double[bins];
     double[] timeSettlement = new double[bins];
-    bin = 0;
-    for (int i = 0; i < n; i++) {
-      while (t[i] >= upperEdge[bin]) {
-        bin++;
+    for (int b = 0; b < bins; b++) {
+      int from = firstOfBin[b];
+      int to = firstOfBin[b + 1];
+      if (from == to) {
+        continue;
       }
-      double dt = t[i] - meanTime[bin];
-      timeSquares[bin] += w[i] * dt * dt;
-      timeSettlement[bin] += w[i] * dt * (y[i] - meanSettlement[bin]);
+      // Sums in local variables (no chain through memory); the order of the readings is kept.
+      double sumW = 0;
+      double sumWt = 0;
+      double sumWy = 0;
+      for (int i = from; i < to; i++) {
+        sumW += w[i];
+        sumWt += w[i] * t[i];
+        sumWy += w[i] * y[i];
+      }
+      weightSum[b] = sumW;
+      weightedTime[b] = sumWt;
+      weightedSettlement[b] = sumWy;
+      double meanT = sumWt / sumW;
+      double meanY = sumWy / sumW;
+      meanTime[b] = meanT;
+      meanSettlement[b] = meanY;
+      // Spread of time and its co-variation with settlement about the bin means.
+      double squares = 0;
+      double products = 0;
+      for (int i = from; i < to; i++) {
+        double dt = t[i] - meanT;
+        squares += w[i] * dt * dt;
+        products += w[i] * dt * (y[i] - meanY);
+      }
+      timeSquares[b] = squares;
+      timeSettlement[b] = products;
     }
-    double[] times = new double[2 * bins];
-    double[] settlements = new double[2 * bins];
-    double[] weights = new double[2 * bins];
-    int count = 0;
     // Means of coarse bins (merge consecutive bins each) for the start values.
     double[] means = new double[bins];
     double[] meanWeights = new double[bins];
@@ -132,6 +146,10 @@ final class ReadingGroups {
         binCount++;
       }
     }
+    double[] times = new double[2 * bins];
+    double[] settlements = new double[2 * bins];
+    double[] weights = new double[2 * bins];
+    int count = 0;
     double previous = Double.NEGATIVE_INFINITY;
     for (int b = 0; b < bins; b++) {
       if (!(weightSum[b] > 0)) {
