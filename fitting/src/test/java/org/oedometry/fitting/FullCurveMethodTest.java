@@ -123,36 +123,15 @@ class FullCurveMethodTest {
       CurveParameters truth = CurveParameters.of(0.015e-3, 0.500e-3, cvPerYear / YEAR, 0.020e-3);
       SettlementCurve curve = curve(loggerSchedule(), truth, 1e-6, random);
       FullCurveResult fit = FullCurveMethod.fit(curve, DRAINAGE_PATH);
-      double[] t = curve.elapsedSeconds();
-      double[] y = curve.settlementMetres();
-      double[] w = FullCurveMethod.weights(t, FullCurveOptions.ReadingWeights.LOG_TIME_BALANCE);
-      ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
       WeightedLeastSquares.Solution reference =
-          WeightedLeastSquares.withDefaults()
-              .solve(
-                  ((WeightedLeastSquares.PointModel)
-                          (i, q, g) ->
-                              model.settlementAndGradient(
-                                  t[i], CurveParameters.of(q[0], q[1], Math.exp(q[2]), q[3]), g))
-                      .asModel(),
-                  y,
-                  w,
-                  new double[] {0, 0.4e-3, Math.log(truth.cv()), 0.01e-3},
-                  null);
-      double[] q = reference.parameters();
-      double[] se = reference.standardErrors();
-      double[] fitted = {fit.d0(), fit.d100() - fit.d0(), Math.log(fit.cv()), fit.secondarySlope()};
-      for (int j = 0; j < 4; j++) {
-        assertThat(Math.abs(fitted[j] - q[j]))
-            .as("parameter %d at %s m^2/yr, against %s standard errors", j, cvPerYear, se[j])
-            .isLessThanOrEqualTo(0.01 * se[j] + 1e-12 * Math.abs(q[j]));
-      }
+          assertWithinHundredthOfStandardError(
+              cvPerYear + " m^2/yr", curve, FullCurveOptions.defaults(), fit, truth.cv());
       // The result's error of ln c_v is the sandwich form, widened by AR(1) for correlated
       // residuals (these are independent, so by at most a few per cent).
       double sandwich = Math.sqrt(reference.equalNoiseCovariance()[2][2]);
       double resultError =
           Math.log(fit.cvHigh() / fit.cv())
-              / new org.apache.commons.math3.distribution.TDistribution(null, t.length - 4)
+              / new org.apache.commons.math3.distribution.TDistribution(null, 8640 - 4)
                   .inverseCumulativeProbability(0.975);
       assertThat(resultError).isBetween(0.99 * sandwich, 1.1 * sandwich);
     }
@@ -193,58 +172,76 @@ class FullCurveMethodTest {
             new Case("secondary onset 1", plainCurve, defaults.withSecondaryOnset(1.0)));
     for (Case c : cases) {
       FullCurveResult fit = FullCurveMethod.fit(c.curve(), DRAINAGE_PATH, c.options());
-      double[] all = c.curve().elapsedSeconds();
-      double[] ally = c.curve().settlementMetres();
-      int first = all[0] == 0 ? 1 : 0;
-      double[] t = java.util.Arrays.copyOfRange(all, first, all.length);
-      double[] y = java.util.Arrays.copyOfRange(ally, first, ally.length);
-      double sign = y[y.length - 1] >= y[0] ? 1 : -1;
-      for (int i = 0; i < y.length; i++) {
-        y[i] *= sign;
-      }
-      double[] w = FullCurveMethod.weights(t, c.options().weights());
-      ConsolidationCurveModel model =
-          new ConsolidationCurveModel(DRAINAGE_PATH, c.options().secondaryOnset());
-      int p = c.options().fitSecondary() ? 4 : 3;
-      double[] start =
-          p == 4
-              ? new double[] {0, 0.3e-3, Math.log(truth.cv()), 0.01e-3}
-              : new double[] {0, 0.3e-3, Math.log(truth.cv())};
-      WeightedLeastSquares.Solution reference =
-          WeightedLeastSquares.withDefaults()
-              .solve(
-                  ((WeightedLeastSquares.PointModel)
-                          (i, q, g) -> {
-                            double[] full = new double[4];
-                            double value =
-                                model.settlementAndGradient(
-                                    t[i],
-                                    CurveParameters.of(
-                                        q[0], q[1], Math.exp(q[2]), p == 4 ? q[3] : 0.0),
-                                    full);
-                            System.arraycopy(full, 0, g, 0, p);
-                            return value;
-                          })
-                      .asModel(),
-                  y,
-                  w,
-                  start,
-                  null);
-      double[] q = reference.parameters();
-      double[] se = reference.standardErrors();
-      double[] fitted = {
-        sign * fit.d0(),
-        sign * (fit.d100() - fit.d0()),
-        Math.log(fit.cv()),
-        sign * fit.secondarySlope()
-      };
-      for (int j = 0; j < p; j++) {
-        assertThat(Math.abs(fitted[j] - q[j]))
-            .as("%s: parameter %d against %s standard errors", c.name(), j, se[j])
-            .isLessThanOrEqualTo(0.01 * se[j] + 1e-12 * Math.abs(q[j]));
-      }
-      assertThat(fit.residuals()).as(c.name()).hasSize(t.length);
+      assertWithinHundredthOfStandardError(c.name(), c.curve(), c.options(), fit, truth.cv());
     }
+  }
+
+  /**
+   * The reference for the grouped fit: plain Levenberg-Marquardt (Commons Math through {@link
+   * WeightedLeastSquares#solve}) on every reading after t = 0, in the fitting sign, with the
+   * method's weights, and the same comparison of the method's result against it: every parameter
+   * within 0.01 standard errors.
+   *
+   * @return the reference solution
+   */
+  static WeightedLeastSquares.Solution assertWithinHundredthOfStandardError(
+      String what,
+      SettlementCurve curve,
+      FullCurveOptions options,
+      FullCurveResult fit,
+      double cv) {
+    double[] all = curve.elapsedSeconds();
+    double[] allSettlements = curve.settlementMetres();
+    int first = all[0] == 0 ? 1 : 0;
+    double[] t = java.util.Arrays.copyOfRange(all, first, all.length);
+    double[] y = java.util.Arrays.copyOfRange(allSettlements, first, allSettlements.length);
+    double sign = y[y.length - 1] >= y[0] ? 1 : -1;
+    for (int i = 0; i < y.length; i++) {
+      y[i] *= sign;
+    }
+    double[] w = FullCurveMethod.weights(t, options.weights());
+    ConsolidationCurveModel model =
+        new ConsolidationCurveModel(DRAINAGE_PATH, options.secondaryOnset());
+    int p = options.fitSecondary() ? 4 : 3;
+    double[] start =
+        p == 4
+            ? new double[] {0, 0.3e-3, Math.log(cv), 0.01e-3}
+            : new double[] {0, 0.3e-3, Math.log(cv)};
+    WeightedLeastSquares.Solution reference =
+        WeightedLeastSquares.withDefaults()
+            .solve(
+                ((WeightedLeastSquares.PointModel)
+                        (i, q, g) -> {
+                          double[] full = new double[4];
+                          double value =
+                              model.settlementAndGradient(
+                                  t[i],
+                                  CurveParameters.of(
+                                      q[0], q[1], Math.exp(q[2]), p == 4 ? q[3] : 0.0),
+                                  full);
+                          System.arraycopy(full, 0, g, 0, p);
+                          return value;
+                        })
+                    .asModel(),
+                y,
+                w,
+                start,
+                null);
+    double[] q = reference.parameters();
+    double[] se = reference.standardErrors();
+    double[] fitted = {
+      sign * fit.d0(),
+      sign * (fit.d100() - fit.d0()),
+      Math.log(fit.cv()),
+      sign * fit.secondarySlope()
+    };
+    for (int j = 0; j < p; j++) {
+      assertThat(Math.abs(fitted[j] - q[j]))
+          .as("%s: parameter %d against %s standard errors", what, j, se[j])
+          .isLessThanOrEqualTo(0.01 * se[j] + 1e-12 * Math.abs(q[j]));
+    }
+    assertThat(fit.residuals()).as(what).hasSize(t.length);
+    return reference;
   }
 
   @Test
