@@ -28,9 +28,16 @@ import org.oedometry.core.SettlementCurve;
  * the usual lab schedule has per decade of time, enough to find starts and cheaper than the fine
  * bins.
  *
- * <p>With no more readings than the limit, the groups are the readings themselves. Immutable.
+ * <p>With no more readings than the limit, or readings so bunched in time that fewer than 20 group
+ * points or 8 start-value means would remain, the groups are the readings themselves. Immutable.
  */
 final class ReadingGroups {
+
+  /** Fewer group points than this and the readings are not grouped. */
+  static final int MINIMUM_POINTS = 20;
+
+  /** Fewer start-value means than this and the readings are not grouped. */
+  static final int MINIMUM_MEANS = 8;
 
   private final double[] times;
   private final double[] settlements;
@@ -176,6 +183,11 @@ final class ReadingGroups {
         count++;
         previous = meanTime[b];
       }
+    }
+    if (count < MINIMUM_POINTS || binCount < MINIMUM_MEANS) {
+      // Readings bunched in a few bins: grouping would leave too little to fit; keep them all.
+      double[][] readings = {t.clone(), y.clone(), w.clone()};
+      return new ReadingGroups(readings, readings, false);
     }
     return new ReadingGroups(
         new double[][] {

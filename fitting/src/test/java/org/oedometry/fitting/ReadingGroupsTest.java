@@ -115,7 +115,8 @@ class ReadingGroupsTest {
   @Test
   @DisplayName(
       "Properties: total weight and weighted time are kept, group times increase, and the"
-          + " curve of groups keeps the zero reading and the sign")
+          + " curve of groups keeps the zero reading and the sign (grouped or, with too few bins,"
+          + " kept as readings)")
   void invariants() {
     qt().forAll(integers().between(401, 5000), integers().between(2, 200))
         .checkAssert(
@@ -144,7 +145,12 @@ class ReadingGroupsTest {
               }
               assertThat(groupTotal).isCloseTo(total, within(1e-9 * total));
               assertThat(groupTime).isCloseTo(weightedTime, within(1e-9 * weightedTime));
-              assertThat(groups.times().length).isLessThanOrEqualTo(2 * bins);
+              if (groups.grouped()) {
+                assertThat(groups.times().length).isLessThanOrEqualTo(2 * bins);
+              } else {
+                // Too few bins for the minimum number of points or means: the readings are kept.
+                assertThat(groups.times()).containsExactly(t);
+              }
               double[] curveTimes = new double[n + 1];
               double[] curveSettlements = new double[n + 1];
               curveSettlements[0] = 0.25;
@@ -159,5 +165,24 @@ class ReadingGroupsTest {
               assertThat(curve.settlementMetres()[1]).isEqualTo(-groups.meanSettlements()[0]);
               assertThat(curve.size()).isEqualTo(groups.meanTimes().length + 1);
             });
+  }
+
+  @Test
+  @DisplayName(
+      "Readings bunched in a few bins are not grouped (too few points or means would remain)")
+  void bunchedReadingsAreKept() {
+    int n = 1000;
+    double[] t = new double[n];
+    double[] y = new double[n];
+    double[] w = new double[n];
+    for (int i = 0; i < n; i++) {
+      // Three readings early, the rest within one second at about a day.
+      t[i] = i < 3 ? 10.0 * (i + 1) : 86_400 + 0.001 * i;
+      y[i] = i;
+      w[i] = 1;
+    }
+    ReadingGroups groups = ReadingGroups.of(t, y, w, 400, 100, 3);
+    assertThat(groups.grouped()).isFalse();
+    assertThat(groups.times()).containsExactly(t);
   }
 }
