@@ -17,16 +17,6 @@ final class FrozenDoubles extends AbstractList<Double> implements RandomAccess {
   }
 
   /**
-   * A list of the values (copied).
-   *
-   * @param values the values
-   * @return the list
-   */
-  static FrozenDoubles of(double[] values) {
-    return new FrozenDoubles(values.clone());
-  }
-
-  /**
    * A list whose values are {@code factor} times the given ones.
    *
    * @param values the values

@@ -74,6 +74,22 @@ final class ExactCurves {
     }
   }
 
+  /**
+   * Checks that a method refuses exact curves that end before primary consolidation is far along (T
+   * at the last reading 0.05, 0.3 and 0.5, that is U = 25 %, 59 % and 76 %, 80 readings a decade,
+   * c_v 2 m^2/yr) with a FitException.
+   */
+  static void refusesIncompleteCurves(java.util.function.Function<SettlementCurve, ?> fit) {
+    double cv = 2 / YEAR;
+    for (double lastT : new double[] {0.05, 0.3, 0.5}) {
+      SettlementCurve c =
+          curve(logTimes(cv, 1e-3, lastT, 80), CurveParameters.of(0, 0.5e-3, cv, 0));
+      org.assertj.core.api.Assertions.assertThatThrownBy(() -> fit.apply(c))
+          .as("ending at T = %s", lastT)
+          .isInstanceOf(FitException.class);
+    }
+  }
+
   static SettlementCurve negated(SettlementCurve curve) {
     double[] d = curve.settlementMetres();
     for (int i = 0; i < d.length; i++) {

@@ -16,7 +16,7 @@ class FrozenDoublesTest {
           + " contract]")
   void isAnUnmodifiableList() {
     double[] values = {1.5, -2.0, 0.0};
-    List<Double> list = FrozenDoubles.of(values);
+    List<Double> list = FrozenDoubles.scaled(values, 1);
     values[0] = 99;
     assertThat(list).isEqualTo(List.of(1.5, -2.0, 0.0));
     assertThat(list.hashCode()).isEqualTo(List.of(1.5, -2.0, 0.0).hashCode());
@@ -29,7 +29,7 @@ class FrozenDoublesTest {
   @Test
   @DisplayName("copyOf keeps a frozen list and copies any other into an unmodifiable one")
   void copyOf() {
-    List<Double> frozen = FrozenDoubles.of(new double[] {1, 2});
+    List<Double> frozen = FrozenDoubles.scaled(new double[] {1, 2}, 1);
     assertThat(FrozenDoubles.copyOf(frozen)).isSameAs(frozen);
     List<Double> mutable = new ArrayList<>(List.of(3.0, 4.0));
     List<Double> copy = FrozenDoubles.copyOf(mutable);
