@@ -14,6 +14,7 @@ import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.internal.WeightedLeastSquares;
+import org.oedometry.fitting.synthetic.ReadingSchedules;
 import org.oedometry.theory.ConsolidationCurveModel;
 import org.oedometry.theory.CurveParameters;
 
@@ -272,6 +273,111 @@ class FullCurveMethodTest {
       assertThat(r.d0() - truth.initialSettlement()).isCloseTo(0, within(0.001 * 0.5e-3));
       assertThat(r.secondarySlope() / truth.secondarySlope() - 1).isCloseTo(0, within(0.01));
       assertThat(r.residuals()).hasSize(8640);
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "ln(a/b) by 2 atanh((a - b)/(a + b)) for close readings: within 4 ulp of StrictMath.log(a/b)"
+          + " rounded, for ratios from 1 + 1e-12 to 1e6 [java.lang.StrictMath (fdlibm) as"
+          + " reference]")
+  void logRatioAgainstStrictMath() {
+    SplittableRandom random = new SplittableRandom(11);
+    double worst = 0;
+    for (int k = 0; k < 200_000; k++) {
+      double b = Math.pow(10, random.nextDouble(-3, 7));
+      // Ratios log-uniform from 1 + 1e-12 to 1e6, and dense ones near the series limit.
+      double excess =
+          k % 2 == 0 ? Math.pow(10, random.nextDouble(-12, 6)) : random.nextDouble(0.10, 0.16);
+      double a = b * (1 + excess);
+      if (!(a > b)) {
+        continue;
+      }
+      // Reference: log1p of (a - b)/b computed to 34 digits, then rounded (within 1.5 ulp).
+      double reference = StrictMath.log1p(exactRelativeDifference(a, b));
+      worst =
+          Math.max(
+              worst, Math.abs(FullCurveMethod.logRatio(a, b) - reference) / Math.ulp(reference));
+    }
+    assertThat(worst).as("largest error in ulp").isLessThanOrEqualTo(4);
+  }
+
+  /** (a - b)/b to 34 significant digits, rounded to a double. */
+  private static double exactRelativeDifference(double a, double b) {
+    return new java.math.BigDecimal(a)
+        .subtract(new java.math.BigDecimal(b))
+        .divide(new java.math.BigDecimal(b), java.math.MathContext.DECIMAL128)
+        .doubleValue();
+  }
+
+  @Test
+  @DisplayName(
+      "Default weights: each reading's span of log t, half the distance to its neighbours,"
+          + " normalised to a mean of 1 (the definition, with StrictMath.log1p of the exact relative"
+          + " difference of the neighbours' times)")
+  void weightsAreLogTimeSpans() {
+    double[][] schedules = {
+      ReadingSchedules.usualLab(),
+      ReadingSchedules.uniform(10, 86_400),
+      ReadingSchedules.logSpaced(1, 86_400, 200),
+      {1, 2, 3, 1000, 1001, 5000}
+    };
+    for (double[] t : schedules) {
+      int n = t.length;
+      double[] span = new double[n];
+      double sum = 0;
+      for (int i = 0; i < n; i++) {
+        int low = Math.max(0, i - 1);
+        int high = Math.min(n - 1, i + 1);
+        // ln(t_high / t_low) without the cancellation of a difference of two logarithms.
+        double width = StrictMath.log1p(exactRelativeDifference(t[high], t[low]));
+        span[i] = i == 0 || i == n - 1 ? width : width / 2;
+        sum += span[i];
+      }
+      double[] w = FullCurveMethod.weights(t, FullCurveOptions.ReadingWeights.LOG_TIME_BALANCE);
+      for (int i = 0; i < n; i++) {
+        double expected = Math.max(1e-6, span[i] / (sum / n));
+        assertThat(w[i]).as("weight %d of %d", i, n).isCloseTo(expected, within(1e-12 * expected));
+      }
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Student's t quantile: closed forms for 1 and 2 degrees of freedom (tan(pi (P - 1/2)) and (2P -"
+          + " 1) sqrt(2 / (4 P (1 - P)))), a 20-digit table for 1 to 100 000 [mpmath, generator"
+          + " student_t_quantiles.py in the test resources], and the printed table t(0.975) = 12.706, 4.303, 2.571, 2.228, 2.042, 1.980 for 1, 2,"
+          + " 5, 10, 30, 120 [closed forms: Johnson, Kotz & Balakrishnan, Continuous Univariate"
+          + " Distributions vol. 2, ch. 28, from memory; table: ASTM/NIST-style t tables, from"
+          + " memory]")
+  void studentQuantile() throws IOException {
+    for (double probability : new double[] {0.6, 0.9, 0.95, 0.975, 0.995, 0.9995}) {
+      assertThat(FullCurveMethod.studentQuantile(probability, 1))
+          .isCloseTo(
+              Math.tan(Math.PI * (probability - 0.5)),
+              within(1e-12 * Math.tan(Math.PI * (probability - 0.5))));
+      double two = (2 * probability - 1) * Math.sqrt(2 / (4 * probability * (1 - probability)));
+      assertThat(FullCurveMethod.studentQuantile(probability, 2))
+          .isCloseTo(two, within(1e-13 * two));
+    }
+    List<String> table =
+        Files.readAllLines(
+            Path.of("src/test/resources/org/oedometry/fitting/student-t-quantiles.csv"),
+            StandardCharsets.UTF_8);
+    for (String line : table.subList(1, table.size())) {
+      String[] fields = line.split(",");
+      int dof = Integer.parseInt(fields[0]);
+      double probability = Double.parseDouble(fields[1]);
+      double reference = Double.parseDouble(fields[2]);
+      assertThat(FullCurveMethod.studentQuantile(probability, dof))
+          .as("P = %s, %d degrees of freedom", probability, dof)
+          .isCloseTo(reference, within(2e-13 * reference));
+    }
+    int[] dofs = {1, 2, 5, 10, 30, 120};
+    double[] printed = {12.706, 4.303, 2.571, 2.228, 2.042, 1.980};
+    for (int k = 0; k < dofs.length; k++) {
+      assertThat(FullCurveMethod.studentQuantile(0.975, dofs[k]))
+          .isCloseTo(printed[k], within(5e-4));
     }
   }
 

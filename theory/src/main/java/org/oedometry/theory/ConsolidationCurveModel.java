@@ -35,9 +35,12 @@ package org.oedometry.theory;
  *   dd/ds       = log10(1 + T / T_s)
  * </pre>
  *
- * <p>T U'(T) tends to &radic;(T/&pi;) as T &rarr; 0 and is 0 at T = 0. Accuracy is that of {@link
- * Terzaghi}: relative error of each value and derivative below 10<sup>-14</sup> (plus the rounding
- * of the sums). Immutable and thread-safe.
+ * <p>T U'(T) tends to &radic;(T/&pi;) as T &rarr; 0 and is 0 at T = 0. From T = 16 on, where U is
+ * the largest double below 1 and T U'(T) = 2T e<sup>-&pi;<sup>2</sup>T/4</sup> is below 2.3 x
+ * 10<sup>-16</sup>, that term is taken as 0, so that the late readings of a data logger cost no
+ * exponential: dd/dln c<sub>v</sub> is then exact to within 2.3 x 10<sup>-16</sup> d<sub>p</sub>
+ * absolute. Otherwise the accuracy is that of {@link Terzaghi}: relative error of each value and
+ * derivative below 10<sup>-14</sup> (plus the rounding of the sums). Immutable and thread-safe.
  *
  * @param drainagePath H<sub>dr</sub>, m; finite and &gt; 0
  * @param secondaryOnset T<sub>s</sub>, the time factor at which the secondary term reaches
@@ -51,7 +54,7 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
   /** Number of fitted parameters, in the order d_i, d_p, ln c_v, s. */
   public static final int PARAMETER_COUNT = 4;
 
-  private static final double LN_10 = Math.log(10.0);
+  private static final double INVERSE_LN_10 = 1.0 / Math.log(10.0);
 
   /**
    * Validates the model.
@@ -98,10 +101,7 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    * @throws IllegalArgumentException if the time is negative or not finite
    */
   public double settlement(double seconds, CurveParameters parameters) {
-    final double t = timeFactor(seconds, parameters.cv());
-    return parameters.initialSettlement()
-        + parameters.primarySettlement() * Terzaghi.averageDegree(t)
-        + parameters.secondarySlope() * secondaryShape(t);
+    return curve(parameters).settlement(seconds);
   }
 
   /**
@@ -113,13 +113,16 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    * @throws IllegalArgumentException if the time is negative or not finite
    */
   public double secondarySettlement(double seconds, CurveParameters parameters) {
-    final double t = timeFactor(seconds, parameters.cv());
-    return parameters.secondarySlope() * secondaryShape(t);
+    final Curve curve = curve(parameters);
+    requireTime(seconds);
+    return curve.slope * curve.secondaryShape(seconds);
   }
 
   /**
    * Settlement and its gradient with respect to (d<sub>i</sub>, d<sub>p</sub>, ln c<sub>v</sub>, s)
-   * at a time, written into {@code gradient}.
+   * at a time, written into {@code gradient}; the same bits as {@link Curve#settlementAndGradient}
+   * of {@link #curve(CurveParameters)}, which is the faster way to evaluate many times at one set
+   * of parameters.
    *
    * @param seconds elapsed time since loading, s; finite and &ge; 0
    * @param parameters the curve's parameters
@@ -131,56 +134,154 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    */
   public double settlementAndGradient(
       double seconds, CurveParameters parameters, double[] gradient) {
-    if (gradient.length < PARAMETER_COUNT) {
-      throw new IllegalArgumentException(
-          Messages.format(
-              "gradient array length (%d) must be >= %d", gradient.length, PARAMETER_COUNT));
-    }
-    final double t = timeFactor(seconds, parameters.cv());
-    final double degree;
-    final double timeTimesRate;
-    if (t == 0.0) {
-      degree = 0.0;
-      timeTimesRate = 0.0;
-    } else {
-      // The gradient array holds dU/dT for a moment (its first entry is set below).
-      degree = Terzaghi.averageDegreeAndRate(t, gradient);
-      timeTimesRate = t * gradient[0];
-    }
-    final double ratio = t / secondaryOnset;
-    final double onePlusRatio = 1.0 + ratio;
-    final double secondaryShape = naturalLogOnePlus(ratio) / LN_10;
-    gradient[0] = 1.0;
-    gradient[1] = degree;
-    gradient[2] =
-        parameters.primarySettlement() * timeTimesRate
-            + parameters.secondarySlope() * ratio / (onePlusRatio * LN_10);
-    gradient[3] = secondaryShape;
-    return parameters.initialSettlement()
-        + parameters.primarySettlement() * degree
-        + parameters.secondarySlope() * secondaryShape;
+    return curve(parameters).settlementAndGradient(seconds, gradient);
   }
 
   /**
-   * log10(1 + T / T_s), the secondary term per unit slope. ln(1 + x) is computed as ln(u) x / (u -
-   * 1) with u = 1 + x rounded (x itself when u = 1): the rounding error of u cancels between ln u
-   * and u - 1, so the result is accurate to a few ulp for every x &ge; 0 (Goldberg 1991, "What
-   * every computer scientist should know about floating-point arithmetic", ACM Computing Surveys
-   * 23(1), theorem 4), while {@link Math#log} is several times faster than {@link Math#log1p} on
-   * common Java runtimes.
+   * The model at fixed parameters: the constants of the formulas (c<sub>v</sub>/H<sub>dr
+   * </sub><sup>2</sup>, c<sub>v</sub>/(H<sub>dr</sub><sup>2</sup> T<sub>s</sub>)) are computed
+   * once, so that evaluating many readings costs one exponential, one logarithm and one division
+   * each.
+   *
+   * @param parameters the curve's parameters
+   * @return the curve
+   * @throws IllegalArgumentException if the parameters are null
    */
-  private double secondaryShape(double timeFactor) {
-    return naturalLogOnePlus(timeFactor / secondaryOnset) / LN_10;
+  public Curve curve(CurveParameters parameters) {
+    if (parameters == null) {
+      throw new IllegalArgumentException("curve parameters must not be null");
+    }
+    return new Curve(this, parameters);
   }
 
-  /** ln(1 + x) for x &ge; 0 by Goldberg's theorem 4 (see {@link #secondaryShape}). */
+  /**
+   * One increment's time-settlement curve: the model at fixed parameters ({@link
+   * ConsolidationCurveModel#curve(CurveParameters)}). Formulas, units and accuracy are those of the
+   * model; T = (c<sub>v</sub>/H<sub>dr</sub><sup>2</sup>) t and T/T<sub>s</sub> = (c<sub>v
+   * </sub>/(H<sub>dr</sub><sup>2</sup> T<sub>s</sub>)) t are products with constants rounded once
+   * (within 1.5 ulp of the exact T). Immutable and thread-safe.
+   */
+  public static final class Curve {
+    private final ConsolidationCurveModel model;
+    private final CurveParameters parameters;
+    private final double initial;
+    private final double primary;
+    private final double slope;
+
+    /** c_v / H_dr^2, 1/s: T = timeFactorRate t. */
+    private final double timeFactorRate;
+
+    /** c_v / (H_dr^2 T_s), 1/s: T / T_s = onsetRatioRate t. */
+    private final double onsetRatioRate;
+
+    private Curve(ConsolidationCurveModel model, CurveParameters parameters) {
+      this.model = model;
+      this.parameters = parameters;
+      this.initial = parameters.initialSettlement();
+      this.primary = parameters.primarySettlement();
+      this.slope = parameters.secondarySlope();
+      this.timeFactorRate = parameters.cv() / (model.drainagePath() * model.drainagePath());
+      this.onsetRatioRate = timeFactorRate / model.secondaryOnset();
+    }
+
+    /**
+     * The model this curve belongs to.
+     *
+     * @return the model
+     */
+    public ConsolidationCurveModel model() {
+      return model;
+    }
+
+    /**
+     * The curve's parameters.
+     *
+     * @return the parameters
+     */
+    public CurveParameters parameters() {
+      return parameters;
+    }
+
+    /**
+     * Settlement at a time.
+     *
+     * @param seconds elapsed time since loading, s; finite and &ge; 0
+     * @return d(t) = d<sub>i</sub> + d<sub>p</sub> U(T) + s log<sub>10</sub>(1 + T/T<sub>s</sub>),
+     *     m
+     * @throws IllegalArgumentException if the time is negative or not finite
+     */
+    public double settlement(double seconds) {
+      requireTime(seconds);
+      final double t = timeFactorRate * seconds;
+      return initial + primary * Terzaghi.averageDegree(t) + slope * secondaryShape(seconds);
+    }
+
+    /** log10(1 + T / T_s) at a time already checked. */
+    private double secondaryShape(double seconds) {
+      return naturalLogOnePlus(onsetRatioRate * seconds) * INVERSE_LN_10;
+    }
+
+    /**
+     * Settlement and its gradient with respect to (d<sub>i</sub>, d<sub>p</sub>, ln c<sub>v</sub>,
+     * s) at a time, written into {@code gradient} (formulas in the description of {@link
+     * ConsolidationCurveModel}).
+     *
+     * @param seconds elapsed time since loading, s; finite and &ge; 0
+     * @param gradient array of length &ge; {@value #PARAMETER_COUNT} that receives the four partial
+     *     derivatives (m, m, m, dimensionless)
+     * @return d(t), m; the same bits as {@link #settlement(double)}
+     * @throws IllegalArgumentException if the time is negative or not finite, or the array is too
+     *     short
+     */
+    public double settlementAndGradient(double seconds, double[] gradient) {
+      if (gradient.length < PARAMETER_COUNT) {
+        throw new IllegalArgumentException(
+            Messages.format(
+                "gradient array length (%d) must be >= %d", gradient.length, PARAMETER_COUNT));
+      }
+      requireTime(seconds);
+      final double t = timeFactorRate * seconds;
+      final double degree;
+      final double timeTimesRate;
+      if (t == 0.0) {
+        degree = 0.0;
+        timeTimesRate = 0.0;
+      } else if (t >= Terzaghi.SETTLED_TIME_FACTOR) {
+        // T U'(T) = 2 T exp(-pi^2 T / 4) < 2.3e-16 here: dropped (see the class description).
+        degree = Terzaghi.averageDegree(t);
+        timeTimesRate = 0.0;
+      } else {
+        // The gradient array holds dU/dT for a moment (its first entry is set below).
+        degree = Terzaghi.averageDegreeAndRate(t, gradient);
+        timeTimesRate = t * gradient[0];
+      }
+      final double ratio = onsetRatioRate * seconds;
+      final double secondaryShape = naturalLogOnePlus(ratio) * INVERSE_LN_10;
+      gradient[0] = 1.0;
+      gradient[1] = degree;
+      gradient[2] = primary * timeTimesRate + slope * (ratio * INVERSE_LN_10) / (1.0 + ratio);
+      gradient[3] = secondaryShape;
+      return initial + primary * degree + slope * secondaryShape;
+    }
+  }
+
+  /**
+   * ln(1 + x) for x &ge; 0, the secondary term per unit slope times ln 10. Below x = 1 it is
+   * computed as ln(u) x / (u - 1) with u = 1 + x rounded (x itself when u = 1): the rounding error
+   * of u cancels between ln u and u - 1, so the result is accurate to a few ulp (Goldberg 1991,
+   * "What every computer scientist should know about floating-point arithmetic", ACM Computing
+   * Surveys 23(1), theorem 4), while {@link Math#log} is several times faster than {@link
+   * Math#log1p} on common Java runtimes. From x = 1 on, ln u itself is within 0.75 ulp of ln(1 + x)
+   * (the rounding of u, at most half an ulp of u, moves ln u by at most 2<sup>-53</sup>, and ln(1 +
+   * x) &ge; ln 2), so the division is saved.
+   */
   static double naturalLogOnePlus(double x) {
     final double u = 1.0 + x;
+    if (x >= 1.0) {
+      return u == Double.POSITIVE_INFINITY ? Math.log(x) : Math.log(u);
+    }
     if (u == 1.0) {
       return x;
-    }
-    if (u == Double.POSITIVE_INFINITY) {
-      return Math.log(x);
     }
     return Math.log(u) * (x / (u - 1.0));
   }

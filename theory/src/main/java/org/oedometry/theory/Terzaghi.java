@@ -104,6 +104,21 @@ public final class Terzaghi {
    */
   private static final double SINGLE_TERM_LIMIT = 0x1.0p-7;
 
+  /**
+   * From this T on the exact U is so close to 1 that {@link #averageDegree(double)} returns the
+   * largest double below 1 whatever the series gives: (8/&pi;<sup>2</sup>) exp(-&pi;<sup>2</sup> 16
+   * /4) = 5.8 x 10<sup>-18</sup>, below 2<sup>-54</sup>, so 1 - U rounds to 1 and is held below it.
+   * The exponential is not computed there. Package access for {@link ConsolidationCurveModel}.
+   */
+  static final double SETTLED_TIME_FACTOR = 16.0;
+
+  /**
+   * Below this T (1/38.5) the image correction of dU/dT, 2 e<sup>-1/T</sup>, is below 2<sup>-54
+   * </sup>: 2 e<sup>-38.5</sup> = 3.9 x 10<sup>-17</sup> (2<sup>-54</sup> = 5.55 x
+   * 10<sup>-17</sup>).
+   */
+  private static final double IMAGE_CORRECTION_NEGLIGIBLE = 1.0 / 38.5;
+
   /** erfc(x) &lt; 2.2e-17 above this argument: image terms beyond it are dropped. */
   private static final double ERFC_NEGLIGIBLE_ARGUMENT = 6.0;
 
@@ -150,6 +165,10 @@ public final class Terzaghi {
     if (timeFactor == Double.POSITIVE_INFINITY) {
       return 1.0;
     }
+    if (timeFactor >= SETTLED_TIME_FACTOR) {
+      // The same bits as the line below, without its exponential.
+      return LARGEST_BELOW_ONE;
+    }
     // Above T = 15 the exact U lies within half an ulp of 1: keep the result below 1.
     return Math.min(1.0 - remainingFractionSeries(timeFactor), LARGEST_BELOW_ONE);
   }
@@ -189,7 +208,7 @@ public final class Terzaghi {
               "time factor T (%s) must be > 0 for dU/dT (unbounded at T = 0)", timeFactor));
     }
     if (timeFactor < SHORT_TIME_LIMIT) {
-      return (1.0 - 2.0 * Math.exp(-1.0 / timeFactor)) / Math.sqrt(Math.PI * timeFactor);
+      return shortTimeRate(timeFactor);
     }
     if (timeFactor == Double.POSITIVE_INFINITY) {
       return 0.0;
@@ -283,6 +302,20 @@ public final class Terzaghi {
   }
 
   /**
+   * dU/dT below {@link #SHORT_TIME_LIMIT}: (1 - 2 e<sup>-1/T</sup>)/&radic;(&pi;T), whose
+   * correction 2 e<sup>-1/T</sup> rounds away against 1 (it is at most 2<sup>-54</sup>, half an ulp
+   * below 1, and 1 - x then rounds to 1) below {@link #IMAGE_CORRECTION_NEGLIGIBLE}: the
+   * exponential is then not computed, with the same bits.
+   */
+  private static double shortTimeRate(double timeFactor) {
+    final double root = Math.sqrt(Math.PI * timeFactor);
+    if (timeFactor < IMAGE_CORRECTION_NEGLIGIBLE) {
+      return 1.0 / root;
+    }
+    return (1.0 - 2.0 * Math.exp(-1.0 / timeFactor)) / root;
+  }
+
+  /**
    * U(T) and dU/dT together, from one exponential: U is bit for bit {@link #averageDegree(double)};
    * dU/dT agrees with {@link #averageDegreeDerivative(double)} to within 2<sup>-56</sup> relative
    * (the Fourier sum stops at the same term as that of U). For the curve model, which needs both
@@ -298,7 +331,7 @@ public final class Terzaghi {
           Messages.format("time factor T (%s) must be > 0 for dU/dT", timeFactor));
     }
     if (timeFactor < SHORT_TIME_LIMIT) {
-      rate[0] = (1.0 - 2.0 * Math.exp(-1.0 / timeFactor)) / Math.sqrt(Math.PI * timeFactor);
+      rate[0] = shortTimeRate(timeFactor);
       return TWO_OVER_SQRT_PI * Math.sqrt(timeFactor);
     }
     if (timeFactor == Double.POSITIVE_INFINITY) {

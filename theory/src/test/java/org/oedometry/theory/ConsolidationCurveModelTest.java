@@ -174,4 +174,27 @@ class ConsolidationCurveModelTest {
     assertThat(ConsolidationCurveModel.naturalLogOnePlus(Double.MAX_VALUE))
         .isEqualTo(Math.log(Double.MAX_VALUE));
   }
+
+  @Test
+  @DisplayName(
+      "From T = 16 on the primary part of dd/dln c_v, d_p T U'(T), is dropped: the gradient stays"
+          + " within 2.3e-16 d_p of the exact one [dU/dT from Terzaghi.averageDegreeDerivative]")
+  void latePrimaryRateIsNegligible() {
+    ConsolidationCurveModel.Curve curve = MODEL.curve(PARAMETERS);
+    double[] gradient = new double[4];
+    double timeFactorRate = PARAMETERS.cv() / (0.0095 * 0.0095);
+    for (double t = 14 / timeFactorRate; t < 1e4 / timeFactorRate; t *= 1.01) {
+      double value = curve.settlementAndGradient(t, gradient);
+      double timeFactor = timeFactorRate * t;
+      double ratio = timeFactor / ConsolidationCurveModel.DEFAULT_SECONDARY_ONSET;
+      double exact =
+          PARAMETERS.primarySettlement() * timeFactor * Terzaghi.averageDegreeDerivative(timeFactor)
+              + PARAMETERS.secondarySlope() * ratio / ((1 + ratio) * Math.log(10));
+      assertThat(gradient[2])
+          .as("dd/dln c_v at T = %s", timeFactor)
+          .isCloseTo(exact, within(2.3e-16 * PARAMETERS.primarySettlement() + 1e-15 * exact));
+      assertThat(value).isEqualTo(curve.settlement(t));
+      assertThat(value).isEqualTo(MODEL.settlement(t, PARAMETERS));
+    }
+  }
 }

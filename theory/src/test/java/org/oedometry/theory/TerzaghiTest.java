@@ -290,4 +290,33 @@ class TerzaghiTest {
     assertThatThrownBy(() -> Terzaghi.averageDegreeAndRate(0, rate))
         .isInstanceOf(IllegalArgumentException.class);
   }
+
+  @Test
+  @DisplayName(
+      "Shortcuts without an exponential give the bits of the full formulas: U = min(1 - (8/pi^2)"
+          + " exp(-pi^2 T/4), largest double below 1) from T = 16, dU/dT = (1 - 2 exp(-1/T))"
+          + " / sqrt(pi T) below T = 1/38.5 [the formulas of the class description, evaluated"
+          + " here]")
+  void shortcutsKeepTheBits() {
+    double largestBelowOne = Math.nextDown(1.0);
+    for (double t = 14; t < 1e6; t *= 1.0007) {
+      double full =
+          Math.min(
+              1.0 - 8.0 / (Math.PI * Math.PI) * Math.exp(-Math.PI * Math.PI / 4.0 * t),
+              largestBelowOne);
+      if (t >= 16) {
+        assertThat(Terzaghi.averageDegree(t)).as("U at T = %s", t).isEqualTo(full);
+        assertThat(full).isEqualTo(largestBelowOne);
+      } else {
+        assertThat(Terzaghi.averageDegree(t)).isCloseTo(full, within(2e-16));
+      }
+    }
+    double[] rate = new double[1];
+    for (double t = 1e-6; t < Terzaghi.SHORT_TIME_LIMIT; t *= 1.0003) {
+      double full = (1.0 - 2.0 * Math.exp(-1.0 / t)) / Math.sqrt(Math.PI * t);
+      assertThat(Terzaghi.averageDegreeDerivative(t)).as("dU/dT at T = %s", t).isEqualTo(full);
+      Terzaghi.averageDegreeAndRate(t, rate);
+      assertThat(rate[0]).isEqualTo(full);
+    }
+  }
 }

@@ -691,10 +691,15 @@ public final class WeightedLeastSquares {
       return new Pass(parameters, residuals, a, b, g, c);
     }
 
+    /** Readings evaluated before their sums are taken (the columns of a block stay in cache). */
+    private static final int BLOCK = 128;
+
     /**
-     * {@link #over} for up to four parameters with the sums in local variables (the hot loop of the
-     * full-curve fit: several times faster than two-dimensional arrays); the same sums in the same
-     * order, so the same bits.
+     * {@link #over} for up to four parameters, by blocks of {@value #BLOCK} observations: the model
+     * fills the block's columns, then three short loops take the sums (g and c; A; B) with at most
+     * ten accumulators each, which the processor keeps in registers (one loop with all 25 sums
+     * spills them to memory at every observation, and costs more than the model). Each block's sums
+     * are added to the totals in block order: deterministic, and the same for every run.
      */
     private static Pass overAtMostFour(
         PointModel model, double[] observed, double[] weights, double[] parameters) {
@@ -702,61 +707,131 @@ public final class WeightedLeastSquares {
       int p = parameters.length;
       double[] residuals = new double[n];
       double[] row = new double[4];
+      double[] c0 = new double[BLOCK];
+      double[] c1 = new double[BLOCK];
+      double[] c2 = new double[BLOCK];
+      double[] c3 = new double[BLOCK];
       double a00 = 0, a10 = 0, a11 = 0, a20 = 0, a21 = 0, a22 = 0, a30 = 0, a31 = 0, a32 = 0;
       double a33 = 0;
       double b00 = 0, b10 = 0, b11 = 0, b20 = 0, b21 = 0, b22 = 0, b30 = 0, b31 = 0, b32 = 0;
       double b33 = 0;
       double g0 = 0, g1 = 0, g2 = 0, g3 = 0;
       double c = 0;
-      for (int i = 0; i < n; i++) {
-        double value = model.valueAndGradient(i, parameters, row);
-        if (!Double.isFinite(value)) {
-          throw new NonFiniteModelException(i, value, parameters);
-        }
-        double x0 = row[0];
-        double x1 = row[1];
-        double x2 = row[2];
-        double x3 = row[3];
-        if (!Double.isFinite(x0 + x1 + x2 + x3)) {
-          for (int j = 0; j < p; j++) {
-            if (!Double.isFinite(row[j])) {
-              throw new NonFiniteModelException(i, row[j], parameters);
-            }
+      for (int start = 0; start < n; start += BLOCK) {
+        final int size = Math.min(BLOCK, n - start);
+        for (int k = 0; k < size; k++) {
+          int i = start + k;
+          double value = model.valueAndGradient(i, parameters, row);
+          if (!Double.isFinite(value)) {
+            throw new NonFiniteModelException(i, value, parameters);
           }
-          // Finite entries whose sum overflows: no error (the sums below will show it).
+          double x0 = row[0];
+          double x1 = row[1];
+          double x2 = row[2];
+          double x3 = row[3];
+          if (!Double.isFinite(x0 + x1 + x2 + x3)) {
+            for (int j = 0; j < p; j++) {
+              if (!Double.isFinite(row[j])) {
+                throw new NonFiniteModelException(i, row[j], parameters);
+              }
+            }
+            // Finite entries whose sum overflows: no error (the sums below will show it).
+          }
+          residuals[i] = observed[i] - value;
+          c0[k] = x0;
+          c1[k] = x1;
+          c2[k] = x2;
+          c3[k] = x3;
         }
-        double r = observed[i] - value;
-        residuals[i] = r;
-        double w = weights[i];
-        c += w * r * r;
-        double w0 = w * x0;
-        double w1 = w * x1;
-        double w2 = w * x2;
-        double w3 = w * x3;
-        g0 += w0 * r;
-        g1 += w1 * r;
-        g2 += w2 * r;
-        g3 += w3 * r;
-        a00 += w0 * x0;
-        a10 += w1 * x0;
-        a11 += w1 * x1;
-        a20 += w2 * x0;
-        a21 += w2 * x1;
-        a22 += w2 * x2;
-        a30 += w3 * x0;
-        a31 += w3 * x1;
-        a32 += w3 * x2;
-        a33 += w3 * x3;
-        b00 += w * w0 * x0;
-        b10 += w * w1 * x0;
-        b11 += w * w1 * x1;
-        b20 += w * w2 * x0;
-        b21 += w * w2 * x1;
-        b22 += w * w2 * x2;
-        b30 += w * w3 * x0;
-        b31 += w * w3 * x1;
-        b32 += w * w3 * x2;
-        b33 += w * w3 * x3;
+        double sc = 0, sg0 = 0, sg1 = 0, sg2 = 0, sg3 = 0;
+        for (int k = 0; k < size; k++) {
+          double w = weights[start + k];
+          double wr = w * residuals[start + k];
+          sc += wr * residuals[start + k];
+          sg0 += wr * c0[k];
+          sg1 += wr * c1[k];
+          sg2 += wr * c2[k];
+          sg3 += wr * c3[k];
+        }
+        c += sc;
+        g0 += sg0;
+        g1 += sg1;
+        g2 += sg2;
+        g3 += sg3;
+        double s00 = 0, s10 = 0, s11 = 0, s20 = 0, s21 = 0, s22 = 0, s30 = 0, s31 = 0, s32 = 0;
+        double s33 = 0;
+        for (int k = 0; k < size; k++) {
+          double w = weights[start + k];
+          double x0 = c0[k];
+          double x1 = c1[k];
+          double x2 = c2[k];
+          double x3 = c3[k];
+          double w0 = w * x0;
+          double w1 = w * x1;
+          double w2 = w * x2;
+          double w3 = w * x3;
+          s00 += w0 * x0;
+          s10 += w1 * x0;
+          s11 += w1 * x1;
+          s20 += w2 * x0;
+          s21 += w2 * x1;
+          s22 += w2 * x2;
+          s30 += w3 * x0;
+          s31 += w3 * x1;
+          s32 += w3 * x2;
+          s33 += w3 * x3;
+        }
+        a00 += s00;
+        a10 += s10;
+        a11 += s11;
+        a20 += s20;
+        a21 += s21;
+        a22 += s22;
+        a30 += s30;
+        a31 += s31;
+        a32 += s32;
+        a33 += s33;
+        s00 = 0;
+        s10 = 0;
+        s11 = 0;
+        s20 = 0;
+        s21 = 0;
+        s22 = 0;
+        s30 = 0;
+        s31 = 0;
+        s32 = 0;
+        s33 = 0;
+        for (int k = 0; k < size; k++) {
+          double w = weights[start + k];
+          double x0 = c0[k];
+          double x1 = c1[k];
+          double x2 = c2[k];
+          double x3 = c3[k];
+          double w0 = w * w * x0;
+          double w1 = w * w * x1;
+          double w2 = w * w * x2;
+          double w3 = w * w * x3;
+          s00 += w0 * x0;
+          s10 += w1 * x0;
+          s11 += w1 * x1;
+          s20 += w2 * x0;
+          s21 += w2 * x1;
+          s22 += w2 * x2;
+          s30 += w3 * x0;
+          s31 += w3 * x1;
+          s32 += w3 * x2;
+          s33 += w3 * x3;
+        }
+        b00 += s00;
+        b10 += s10;
+        b11 += s11;
+        b20 += s20;
+        b21 += s21;
+        b22 += s22;
+        b30 += s30;
+        b31 += s31;
+        b32 += s32;
+        b33 += s33;
       }
       double[][] fullA = {
         {a00, a10, a20, a30}, {a10, a11, a21, a31}, {a20, a21, a22, a32}, {a30, a31, a32, a33}
