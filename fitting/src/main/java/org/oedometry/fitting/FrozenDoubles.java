@@ -17,18 +17,13 @@ final class FrozenDoubles extends AbstractList<Double> implements RandomAccess {
   }
 
   /**
-   * A list whose values are {@code factor} times the given ones.
+   * A list over the given array, which it takes over: the caller must not keep or change it.
    *
    * @param values the values
-   * @param factor the factor
    * @return the list
    */
-  static FrozenDoubles scaled(double[] values, double factor) {
-    double[] copy = new double[values.length];
-    for (int i = 0; i < copy.length; i++) {
-      copy[i] = factor * values[i];
-    }
-    return new FrozenDoubles(copy);
+  static FrozenDoubles owning(double[] values) {
+    return new FrozenDoubles(values);
   }
 
   /**

@@ -110,6 +110,12 @@ public final class FullCurveMethod {
   private static final double REFINEMENT_STANDARD_ERRORS = 0.01;
 
   /**
+   * Relative tolerance of Levenberg-Marquardt on the groups (above {@link #GROUPING_LIMIT}); the
+   * fit is then finished on every reading.
+   */
+  private static final double SEARCH_TOLERANCE = 1e-8;
+
+  /**
    * Starts whose ln c_v differ by less than half a step of the profile (the profile's c_v grow by a
    * factor of about 1.58 a step) are one start as far as the profile can tell: the later is
    * skipped.
@@ -176,6 +182,7 @@ public final class FullCurveMethod {
             : Arrays.copyOfRange(allSettlements, first, allSettlements.length);
     double lowest = y[0];
     double highest = y[0];
+    double sum = 0;
     for (double value : y) {
       // The readings are finite (SettlementCurve): plain comparisons suffice.
       if (value < lowest) {
@@ -184,6 +191,7 @@ public final class FullCurveMethod {
       if (value > highest) {
         highest = value;
       }
+      sum += value;
     }
     if (!(highest > lowest)) {
       throw new FitException(
@@ -192,6 +200,8 @@ public final class FullCurveMethod {
               + " m): there is no consolidation to fit");
     }
     final double sign = y[n - 1] >= y[0] ? 1.0 : -1.0;
+    // Mean of the fitted (magnitude) settlements, for R^2.
+    final double mean = sign * sum / n;
     if (sign < 0) {
       // Fitted on the magnitude (the array is this method's own copy).
       for (int i = 0; i < n; i++) {
@@ -259,6 +269,9 @@ public final class FullCurveMethod {
             System.arraycopy(full, 0, jacobian[i], 0, parameterCount);
           }
         };
+    // On groups the search only has to come near enough for the pass over every reading to finish
+    // it (which keeps the solver's own tolerance): a looser tolerance saves iterations there.
+    WeightedLeastSquares searchSolver = solver.withTolerance(SEARCH_TOLERANCE);
     ParameterValidator bounds =
         point -> {
           point.setEntry(1, Math.max(0.0, point.getEntry(1)));
@@ -296,7 +309,7 @@ public final class FullCurveMethod {
       try {
         WeightedLeastSquares.Solution solution =
             groups.grouped()
-                ? solver.solveStreamed(
+                ? searchSolver.solveStreamed(
                     new CurvePoints(model, groupTimes, parameterCount),
                     groups.settlements(),
                     groups.weights(),
@@ -354,13 +367,15 @@ public final class FullCurveMethod {
 
     // 3. Covariance: sandwich with noise variance from unweighted residuals, AR(1) widening.
     double[] residuals = best.residuals();
-    double sumSquares = 0;
+    // One pass: the residuals' sum of squares and lag-1 products, and the total sum of squares of
+    // the settlements about their mean (for R^2).
+    double sumSquares = residuals[0] * residuals[0];
     double lagProduct = 0;
-    for (int i = 0; i < n; i++) {
+    double total = (y[0] - mean) * (y[0] - mean);
+    for (int i = 1; i < n; i++) {
       sumSquares += residuals[i] * residuals[i];
-      if (i > 0) {
-        lagProduct += residuals[i] * residuals[i - 1];
-      }
+      lagProduct += residuals[i] * residuals[i - 1];
+      total += (y[i] - mean) * (y[i] - mean);
     }
     double autocorrelation = sumSquares > 0 ? lagProduct / sumSquares : 0.0;
     double clipped = Math.min(0.95, Math.max(0.0, autocorrelation));
@@ -383,15 +398,6 @@ public final class FullCurveMethod {
     }
 
     // 4. Statistics, warnings and the plotted curve.
-    double mean = 0;
-    for (double value : y) {
-      mean += value;
-    }
-    mean /= n;
-    double total = 0;
-    for (double value : y) {
-      total += (value - mean) * (value - mean);
-    }
     double rSquared = total > 0 ? 1 - sumSquares / total : 0.0;
     double endFactor = cv * lastTime / pathSquared;
     List<FitWarning> warnings = new ArrayList<>();
@@ -460,7 +466,14 @@ public final class FullCurveMethod {
       double logTime = logFirst + (logLast - logFirst) * k / (CURVE_POINTS - 1);
       plotted.add(new PlotPoint(logTime, sign * fittedCurve.settlement(Math.pow(10, logTime))));
     }
-    List<Double> residualList = FrozenDoubles.scaled(residuals, sign);
+    // The residuals array is this method's own copy: the list takes it over, negated in place for a
+    // swelling increment.
+    if (sign < 0) {
+      for (int i = 0; i < n; i++) {
+        residuals[i] = -residuals[i];
+      }
+    }
+    List<Double> residualList = FrozenDoubles.owning(residuals);
     CurveParameters reported = new CurveParameters(sign * p[0], sign * p[1], cv, sign * secondary);
     return new FullCurveResult(
         cv,

@@ -15,12 +15,9 @@ class FrozenDoublesTest {
       "Behaves as an unmodifiable list equal to List.of of the same values [java.util.List"
           + " contract]")
   void isAnUnmodifiableList() {
-    double[] values = {1.5, -2.0, 0.0};
-    List<Double> list = FrozenDoubles.scaled(values, 1);
-    values[0] = 99;
+    List<Double> list = FrozenDoubles.owning(new double[] {1.5, -2.0, 0.0});
     assertThat(list).isEqualTo(List.of(1.5, -2.0, 0.0));
     assertThat(list.hashCode()).isEqualTo(List.of(1.5, -2.0, 0.0).hashCode());
-    assertThat(FrozenDoubles.scaled(new double[] {1, 2}, -1)).containsExactly(-1.0, -2.0);
     assertThatThrownBy(() -> list.set(0, 1.0)).isInstanceOf(UnsupportedOperationException.class);
     assertThatThrownBy(() -> list.add(1.0)).isInstanceOf(UnsupportedOperationException.class);
     assertThatThrownBy(() -> list.get(3)).isInstanceOf(IndexOutOfBoundsException.class);
@@ -29,7 +26,7 @@ class FrozenDoublesTest {
   @Test
   @DisplayName("copyOf keeps a frozen list and copies any other into an unmodifiable one")
   void copyOf() {
-    List<Double> frozen = FrozenDoubles.scaled(new double[] {1, 2}, 1);
+    List<Double> frozen = FrozenDoubles.owning(new double[] {1, 2});
     assertThat(FrozenDoubles.copyOf(frozen)).isSameAs(frozen);
     List<Double> mutable = new ArrayList<>(List.of(3.0, 4.0));
     List<Double> copy = FrozenDoubles.copyOf(mutable);
