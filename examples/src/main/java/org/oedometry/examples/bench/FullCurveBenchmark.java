@@ -30,12 +30,16 @@ import org.openjdk.jmh.annotations.Warmup;
  * Levenberg-Marquardt refinement alone from one fixed start with (a) the analytic Jacobian and the
  * fast U(T) of the library and (b) the baseline: central finite differences and the plain 100-term
  * series ({@link PlainSeries}). Scores are microseconds per fit.
+ *
+ * <p>Warm-up is 10 iterations of 2 s: a fit calls several methods once each with a loop over every
+ * reading, and on a 2-core machine the optimising compiler reaches some of them only after 10 s or
+ * more; with 3 warm-up iterations we measured up to twice the steady-state time.
  */
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MICROSECONDS)
-@Warmup(iterations = 3, time = 2)
+@Warmup(iterations = 10, time = 2)
 @Measurement(iterations = 5, time = 2)
-@Fork(1)
+@Fork(2)
 @State(Scope.Benchmark)
 public class FullCurveBenchmark {
 

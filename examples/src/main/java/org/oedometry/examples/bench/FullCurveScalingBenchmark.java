@@ -27,12 +27,16 @@ import org.openjdk.jmh.annotations.Warmup;
  * increment (as in {@link FullCurveBenchmark}) read by a data logger every 86.4 s, 8.64 s or 0.864
  * s (1,000, 10,000 or 100,000 readings), beside the log-time construction on the same readings as
  * the baseline of the same run. Scores are microseconds per fit.
+ *
+ * <p>Warm-up is 10 iterations of 2 s: a fit calls several methods once each with a loop over every
+ * reading, and on a 2-core machine the optimising compiler reaches some of them only after 10 s or
+ * more; with 3 warm-up iterations we measured up to twice the steady-state time.
  */
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MICROSECONDS)
-@Warmup(iterations = 3, time = 2)
+@Warmup(iterations = 10, time = 2)
 @Measurement(iterations = 5, time = 2)
-@Fork(1)
+@Fork(2)
 @State(Scope.Benchmark)
 public class FullCurveScalingBenchmark {
 
