@@ -1,5 +1,7 @@
 package org.oedometry.fitting;
 
+import org.oedometry.fitting.internal.LineFit;
+
 /**
  * Small least-squares fits and a shape-preserving interpolation shared by the further methods. Pure
  * functions; they return null (never NaN) where the system is singular.
@@ -96,38 +98,32 @@ final class SmallFits {
   }
 
   /**
-   * Straight line y = intercept + slope x by ordinary least squares (centred sums).
+   * Straight line y = intercept + slope x by ordinary least squares ({@link LineFit#of}, centred
+   * sums), as an array.
    *
-   * @return {intercept, slope}, or null if the x values do not vary or a result is not finite
+   * @return {intercept, slope}, or null if there are fewer than 2 points, the x values do not vary,
+   *     or a result is not finite
    */
   static double[] line(double[] x, double[] y) {
     int n = x.length;
     if (n < 2) {
       return null;
     }
-    double meanX = 0;
-    double meanY = 0;
-    for (int i = 0; i < n; i++) {
-      meanX += x[i];
-      meanY += y[i];
+    boolean varies = false;
+    for (double value : x) {
+      if (value != x[0]) {
+        varies = true;
+        break;
+      }
     }
-    meanX /= n;
-    meanY /= n;
-    double sxx = 0;
-    double sxy = 0;
-    for (int i = 0; i < n; i++) {
-      sxx += (x[i] - meanX) * (x[i] - meanX);
-      sxy += (x[i] - meanX) * (y[i] - meanY);
-    }
-    if (!(sxx > 0)) {
+    if (!varies) {
       return null;
     }
-    double slope = sxy / sxx;
-    double intercept = meanY - slope * meanX;
-    if (!Double.isFinite(slope) || !Double.isFinite(intercept)) {
+    LineFit fit = LineFit.of(x, y, 0, n);
+    if (!Double.isFinite(fit.slope()) || !Double.isFinite(fit.intercept())) {
       return null;
     }
-    return new double[] {intercept, slope};
+    return new double[] {fit.intercept(), fit.slope()};
   }
 
   /**
