@@ -51,9 +51,11 @@ import org.oedometry.theory.CurveParameters;
  *       reading by Gauss-Newton steps, one pass over the readings each, until the optimum of the
  *       weighted least squares over all readings is nearer than 0.01 standard errors (Levenberg-
  *       Marquardt takes over if a step fails); the grouped optimum usually passes this check at
- *       once, so one pass. The reported fit is therefore the fit to every reading, to well within
- *       its statistical uncertainty (tested against Levenberg-Marquardt on all readings).
- *       Iterations and evaluations count those of the best start plus these steps and passes.
+ *       once, so one pass (Levenberg-Marquardt on the groups therefore stops at a relative
+ *       tolerance of 10<sup>-8</sup>, against 10<sup>-12</sup> on up to 400 readings). The reported
+ *       fit is therefore the fit to every reading, to well within its statistical uncertainty
+ *       (tested against Levenberg-Marquardt on all readings). Iterations and evaluations count
+ *       those of the best start plus these steps and passes.
  *   <li>Interval: the standard error of ln c<sub>v</sub> from the covariance of the parameters,
  *       with the readings' noise variance estimated from the unweighted residuals (&Sigma;r<sup>2
  *       </sup>/(n - p)), by the sandwich A<sup>-1</sup>BA<sup>-1</sup> (A = J<sup>T</sup>WJ, B =
