@@ -36,7 +36,7 @@ package org.oedometry.theory;
  * </pre>
  *
  * <p>T U'(T) tends to &radic;(T/&pi;) as T &rarr; 0 and is 0 at T = 0. From T = 16 on, where U is
- * the largest double below 1 and T U'(T) = 2T e<sup>-&pi;<sup>2</sup>T/4</sup> is below 2.3 x
+ * the largest double below 1 and T U'(T) = 2T exp(-&pi;<sup>2</sup>T/4) is below 2.3 x
  * 10<sup>-16</sup>, that term is taken as 0, so that the late readings of a data logger cost no
  * exponential: dd/dln c<sub>v</sub> is then exact to within 2.3 x 10<sup>-16</sup> d<sub>p</sub>
  * absolute. Otherwise the accuracy is that of {@link Terzaghi}: relative error of each value and
