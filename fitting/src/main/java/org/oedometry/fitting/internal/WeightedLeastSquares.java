@@ -711,10 +711,12 @@ public final class WeightedLeastSquares {
       double[] c1 = new double[BLOCK];
       double[] c2 = new double[BLOCK];
       double[] c3 = new double[BLOCK];
-      double a00 = 0, a10 = 0, a11 = 0, a20 = 0, a21 = 0, a22 = 0, a30 = 0, a31 = 0, a32 = 0;
-      double a33 = 0;
-      double b00 = 0, b10 = 0, b11 = 0, b20 = 0, b21 = 0, b22 = 0, b30 = 0, b31 = 0, b32 = 0;
-      double b33 = 0;
+      double[] weight = new double[BLOCK];
+      double[] squaredWeight = new double[BLOCK];
+      // The ten distinct products of A and of B, in the order 00, 10, 11, 20, 21, 22, 30, 31, 32,
+      // 33.
+      double[] a = new double[10];
+      double[] b = new double[10];
       double g0 = 0, g1 = 0, g2 = 0, g3 = 0;
       double c = 0;
       for (int start = 0; start < n; start += BLOCK) {
@@ -742,12 +744,15 @@ public final class WeightedLeastSquares {
           c1[k] = x1;
           c2[k] = x2;
           c3[k] = x3;
+          double w = weights[i];
+          weight[k] = w;
+          squaredWeight[k] = w * w;
         }
         double sc = 0, sg0 = 0, sg1 = 0, sg2 = 0, sg3 = 0;
         for (int k = 0; k < size; k++) {
-          double w = weights[start + k];
-          double wr = w * residuals[start + k];
-          sc += wr * residuals[start + k];
+          double r = residuals[start + k];
+          double wr = weight[k] * r;
+          sc += wr * r;
           sg0 += wr * c0[k];
           sg1 += wr * c1[k];
           sg2 += wr * c2[k];
@@ -758,95 +763,76 @@ public final class WeightedLeastSquares {
         g1 += sg1;
         g2 += sg2;
         g3 += sg3;
-        double s00 = 0, s10 = 0, s11 = 0, s20 = 0, s21 = 0, s22 = 0, s30 = 0, s31 = 0, s32 = 0;
-        double s33 = 0;
-        for (int k = 0; k < size; k++) {
-          double w = weights[start + k];
-          double x0 = c0[k];
-          double x1 = c1[k];
-          double x2 = c2[k];
-          double x3 = c3[k];
-          double w0 = w * x0;
-          double w1 = w * x1;
-          double w2 = w * x2;
-          double w3 = w * x3;
-          s00 += w0 * x0;
-          s10 += w1 * x0;
-          s11 += w1 * x1;
-          s20 += w2 * x0;
-          s21 += w2 * x1;
-          s22 += w2 * x2;
-          s30 += w3 * x0;
-          s31 += w3 * x1;
-          s32 += w3 * x2;
-          s33 += w3 * x3;
-        }
-        a00 += s00;
-        a10 += s10;
-        a11 += s11;
-        a20 += s20;
-        a21 += s21;
-        a22 += s22;
-        a30 += s30;
-        a31 += s31;
-        a32 += s32;
-        a33 += s33;
-        s00 = 0;
-        s10 = 0;
-        s11 = 0;
-        s20 = 0;
-        s21 = 0;
-        s22 = 0;
-        s30 = 0;
-        s31 = 0;
-        s32 = 0;
-        s33 = 0;
-        for (int k = 0; k < size; k++) {
-          double w = weights[start + k];
-          double x0 = c0[k];
-          double x1 = c1[k];
-          double x2 = c2[k];
-          double x3 = c3[k];
-          double w0 = w * w * x0;
-          double w1 = w * w * x1;
-          double w2 = w * w * x2;
-          double w3 = w * w * x3;
-          s00 += w0 * x0;
-          s10 += w1 * x0;
-          s11 += w1 * x1;
-          s20 += w2 * x0;
-          s21 += w2 * x1;
-          s22 += w2 * x2;
-          s30 += w3 * x0;
-          s31 += w3 * x1;
-          s32 += w3 * x2;
-          s33 += w3 * x3;
-        }
-        b00 += s00;
-        b10 += s10;
-        b11 += s11;
-        b20 += s20;
-        b21 += s21;
-        b22 += s22;
-        b30 += s30;
-        b31 += s31;
-        b32 += s32;
-        b33 += s33;
+        addProducts(weight, c0, c1, c2, c3, size, a);
+        addProducts(squaredWeight, c0, c1, c2, c3, size, b);
       }
       double[][] fullA = {
-        {a00, a10, a20, a30}, {a10, a11, a21, a31}, {a20, a21, a22, a32}, {a30, a31, a32, a33}
+        {a[0], a[1], a[3], a[6]},
+        {a[1], a[2], a[4], a[7]},
+        {a[3], a[4], a[5], a[8]},
+        {a[6], a[7], a[8], a[9]}
       };
       double[][] fullB = {
-        {b00, b10, b20, b30}, {b10, b11, b21, b31}, {b20, b21, b22, b32}, {b30, b31, b32, b33}
+        {b[0], b[1], b[3], b[6]},
+        {b[1], b[2], b[4], b[7]},
+        {b[3], b[4], b[5], b[8]},
+        {b[6], b[7], b[8], b[9]}
       };
       double[] fullG = {g0, g1, g2, g3};
-      double[][] a = new double[p][];
-      double[][] b = new double[p][];
+      double[][] normal = new double[p][];
+      double[][] squared = new double[p][];
       for (int j = 0; j < p; j++) {
-        a[j] = Arrays.copyOf(fullA[j], p);
-        b[j] = Arrays.copyOf(fullB[j], p);
+        normal[j] = Arrays.copyOf(fullA[j], p);
+        squared[j] = Arrays.copyOf(fullB[j], p);
       }
-      return new Pass(parameters, residuals, a, b, Arrays.copyOf(fullG, p), c);
+      return new Pass(parameters, residuals, normal, squared, Arrays.copyOf(fullG, p), c);
+    }
+
+    /**
+     * Adds the block's sums of f<sub>k</sub> x<sub>j</sub> x<sub>l</sub> (ten accumulators in
+     * registers) to the totals, in the order 00, 10, 11, 20, 21, 22, 30, 31, 32, 33.
+     */
+    private static void addProducts(
+        double[] factor,
+        double[] c0,
+        double[] c1,
+        double[] c2,
+        double[] c3,
+        int size,
+        double[] totals) {
+      double s00 = 0, s10 = 0, s11 = 0, s20 = 0, s21 = 0, s22 = 0, s30 = 0, s31 = 0, s32 = 0;
+      double s33 = 0;
+      for (int k = 0; k < size; k++) {
+        double f = factor[k];
+        double x0 = c0[k];
+        double x1 = c1[k];
+        double x2 = c2[k];
+        double x3 = c3[k];
+        double f0 = f * x0;
+        double f1 = f * x1;
+        double f2 = f * x2;
+        double f3 = f * x3;
+        s00 += f0 * x0;
+        s10 += f1 * x0;
+        s11 += f1 * x1;
+        s20 += f2 * x0;
+        s21 += f2 * x1;
+        s22 += f2 * x2;
+        s30 += f3 * x0;
+        s31 += f3 * x1;
+        s32 += f3 * x2;
+        s33 += f3 * x3;
+      }
+      totals[0] += s00;
+      totals[1] += s10;
+      totals[2] += s11;
+      totals[3] += s20;
+      totals[4] += s21;
+      totals[5] += s22;
+      totals[6] += s30;
+      totals[7] += s31;
+      totals[8] += s32;
+      totals[9] += s33;
     }
 
     /**
