@@ -63,11 +63,13 @@ import org.oedometry.theory.Terzaghi;
  * d<sub>0</sub> + S &radic;t fitted by least squares to the readings before 50 % of d<sub>100</sub>
  * - d<sub>0</sub> (60 % when fewer than 3 lie before 50 %; Terzaghi's early curve is U = 2
  * &radic;(T/&pi;), within 0.1 % of U up to 50 %). It is objective and uses readings the hyperbola
- * does not. d<sub>0</sub> and the hyperbola are found together: starting from d<sub>0</sub> = 0,
- * the hyperbola gives d<sub>100</sub> = d<sub>0</sub> + M/m, the early line a new d<sub>0</sub>,
- * until d<sub>0</sub> moves by less than 10<sup>-12</sup> of the readings (at most 30 times). The
- * result reports the d<sub>0</sub> used. Secondary compression raises the late readings and lowers
- * c<sub>v</sub> a little.
+ * does not. d<sub>0</sub> and the hyperbola are found together: a first early line taken from the
+ * first timed reading as zero and the last reading as d<sub>100</sub> gives a first d<sub>0</sub>
+ * (so a deformation on loading as large as the primary settlement does not stop the search; tested
+ * up to 2 d<sub>p</sub>); then the hyperbola gives d<sub>100</sub> = d<sub>0</sub> + M/m and the
+ * early line a new d<sub>0</sub>, until d<sub>0</sub> moves by less than 10<sup>-12</sup> of the
+ * readings (at most 30 times). The result reports the d<sub>0</sub> used. Secondary compression
+ * raises the late readings and lowers c<sub>v</sub> a little.
  *
  * <h2>Accuracy (measured; see the tests)</h2>
  *
@@ -193,28 +195,25 @@ public final class RectangularHyperbolaMethod {
     boolean resample = options.resampleSparseReadings();
     List<FitWarning> warnings = new ArrayList<>(readings.warnings);
     double d0 = 0;
-    Hyperbola line = hyperbola(t, d, d0, resample);
-    if (options.zero() == RectangularHyperbolaOptions.Zero.EARLY_ROOT_TIME_LINE) {
+    Hyperbola line;
+    if (options.zero() == RectangularHyperbolaOptions.Zero.START_OF_INCREMENT) {
+      line = hyperbola(t, d, d0, resample);
+    } else {
       double[] root = new double[n];
       double scale = 0;
       for (int i = 0; i < n; i++) {
         root[i] = Math.sqrt(t[i]);
         scale = Math.max(scale, Math.abs(d[i]));
       }
+      // The first early line takes the first timed reading as the zero and the last as d100, so
+      // that a large deformation on loading (which the zero reading carries and the published form
+      // would count as consolidation) does not stop the iteration before it starts.
+      EarlySlopeMethod.EarlyLine early = earlyLine(root, d, d[n - 1], d[0]);
+      d0 = early.d0;
+      line = hyperbola(t, d, d0, resample);
       boolean settled = false;
-      EarlySlopeMethod.EarlyLine early = null;
       for (int k = 0; k < MAX_ITERATIONS && !settled; k++) {
-        try {
-          early = EarlySlopeMethod.earlyLine(root, d, d0 + line.primary(), d0);
-        } catch (FitException e) {
-          throw new FitException(
-              "the corrected zero of the rectangular hyperbola comes from the early root-time"
-                  + " line, which failed ("
-                  + e.getMessage()
-                  + "); the option Zero.START_OF_INCREMENT counts settlement from the start of"
-                  + " the increment instead",
-              e);
-        }
+        early = earlyLine(root, d, d0 + line.primary(), d0);
         settled = Math.abs(early.d0 - d0) <= ZERO_SETTLED * scale;
         d0 = early.d0;
         line = hyperbola(t, d, d0, resample);
@@ -330,6 +329,22 @@ public final class RectangularHyperbolaMethod {
     /** d<sub>100</sub> - d<sub>0</sub> = M/m, m. */
     double primary() {
       return HYPERBOLA_SLOPE / slope;
+    }
+  }
+
+  /** The early root-time line for the corrected zero, with this method's message if it fails. */
+  private static EarlySlopeMethod.EarlyLine earlyLine(
+      double[] root, double[] d, double d100, double startZero) {
+    try {
+      return EarlySlopeMethod.earlyLine(root, d, d100, startZero);
+    } catch (FitException e) {
+      throw new FitException(
+          "the corrected zero of the rectangular hyperbola comes from the early root-time line,"
+              + " which failed ("
+              + e.getMessage()
+              + "); the option Zero.START_OF_INCREMENT counts settlement from the start of the"
+              + " increment instead",
+          e);
     }
   }
 
