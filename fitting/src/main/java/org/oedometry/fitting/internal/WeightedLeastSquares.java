@@ -697,9 +697,9 @@ public final class WeightedLeastSquares {
     /**
      * {@link #over} for up to four parameters, by blocks of {@value #BLOCK} observations: the model
      * fills the block's columns, then three short loops take the sums (g and c; A; B) with at most
-     * ten accumulators each, which the processor keeps in registers (one loop with all 25 sums
-     * spills them to memory at every observation, and costs more than the model). Each block's sums
-     * are added to the totals in block order: deterministic, and the same for every run.
+     * ten accumulators each, few enough for the processor's registers (one loop with all 25 sums
+     * has more than there are registers). Each block's sums are added to the totals in block order:
+     * deterministic, and the same for every run.
      */
     private static Pass overAtMostFour(
         PointModel model, double[] observed, double[] weights, double[] parameters) {
