@@ -63,49 +63,18 @@ class RectangularHyperbolaMethodTest {
 
   @Test
   @DisplayName(
-      "A deformation on loading as large as or larger than the primary settlement (d_i = 0.5, 1"
-          + " and 2 d_p: seating and apparatus, carried by every reading) on exact dense curves"
-          + " (theory module, mpmath-checked): with the corrected zero (default) c_v within the"
-          + " dense tolerance of 0.3 % and d0 within 0.1 % of d_p of d_i; counted from the start of"
-          + " the increment (published) there is no honest c_v (refused or biased by more than"
-          + " 5 %)")
-  void correctedZeroCopesWithALargeDeformationOnLoading() {
-    RectangularHyperbolaOptions published =
-        RectangularHyperbolaOptions.defaults()
-            .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT);
-    for (double cvPerYear : new double[] {0.3, 2, 10, 60}) {
-      double cv = cvPerYear / ExactCurves.YEAR;
-      for (double fraction : new double[] {0.5, 1.0, 2.0}) {
-        SettlementCurve c = ExactCurves.dense(cv, fraction * 0.5e-3);
-        RectangularHyperbolaResult r = RectangularHyperbolaMethod.fit(c, H);
-        assertThat(r.cv() / cv - 1)
-            .as("%s m^2/yr, d_i %s d_p", cvPerYear, fraction)
-            .isCloseTo(0, within(3e-3));
-        assertThat(r.d0()).isCloseTo(fraction * 0.5e-3, within(1e-3 * 0.5e-3));
-        assertThat(r.warnings()).isEmpty();
-        try {
-          RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, published);
-          assertThat(p.cv() / cv - 1).as("published, d_i %s d_p", fraction).isGreaterThan(0.05);
-        } catch (FitException e) {
-          assertThat(e.getMessage()).isNotBlank();
-        }
-      }
-    }
-  }
-
-  @Test
-  @DisplayName(
-      "Instantaneous compression d_i = 4 % and 10 % of d_p on exact dense curves (theory module,"
+      "Instantaneous compression on loading d_i = 4 %, 10 %, 50 %, 100 % and 200 % of d_p (seating"
+          + " and apparatus, carried by every reading) on exact dense curves (theory module,"
           + " mpmath-checked): with the corrected zero (default) c_v within the dense tolerance of"
           + " 0.3 % and d0 within 0.1 % of d_p of d_i; counted from the start of the increment"
-          + " (published) c_v is biased high by more than 5 %")
+          + " (published) c_v is biased high by more than 5 % (4 % and 10 %) or there is none")
   void correctedZeroRemovesTheBiasOfAnInstantaneousCompression() {
     RectangularHyperbolaOptions published =
         RectangularHyperbolaOptions.defaults()
             .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT);
     for (double cvPerYear : new double[] {0.3, 2, 10, 60}) {
       double cv = cvPerYear / ExactCurves.YEAR;
-      for (double fraction : new double[] {0.04, 0.10}) {
+      for (double fraction : new double[] {0.04, 0.10, 0.5, 1.0, 2.0}) {
         SettlementCurve c = ExactCurves.dense(cv, fraction * 0.5e-3);
         RectangularHyperbolaResult r = RectangularHyperbolaMethod.fit(c, H);
         assertThat(r.cv() / cv - 1)
@@ -115,9 +84,18 @@ class RectangularHyperbolaMethodTest {
         assertThat(r.d100()).isCloseTo((1 + fraction) * 0.5e-3, within(0.002 * 0.5e-3));
         assertThat(r.zero()).isEqualTo(RectangularHyperbolaOptions.Zero.EARLY_ROOT_TIME_LINE);
         assertThat(r.warnings()).isEmpty();
-        RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, published);
-        assertThat(p.cv() / cv - 1).as("published, d_i %s d_p", fraction).isGreaterThan(0.05);
-        assertThat(p.d0()).isZero();
+        if (fraction <= 0.10) {
+          RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, published);
+          assertThat(p.cv() / cv - 1).as("published, d_i %s d_p", fraction).isGreaterThan(0.05);
+          assertThat(p.d0()).isZero();
+        } else {
+          try {
+            RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, published);
+            assertThat(p.cv() / cv - 1).as("published, d_i %s d_p", fraction).isGreaterThan(0.05);
+          } catch (FitException e) {
+            assertThat(e.getMessage()).isNotBlank();
+          }
+        }
       }
     }
   }
