@@ -14,6 +14,11 @@ class RectangularHyperbolaMethodTest {
 
   static final double H = ExactCurves.DRAINAGE_PATH;
 
+  /** The published form: settlement counted from the start of the increment. */
+  private static final RectangularHyperbolaOptions PUBLISHED =
+      RectangularHyperbolaOptions.defaults()
+          .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT);
+
   @Test
   @DisplayName(
       "M and C: about 0.8215 and 0.2436 (FACTS.md, sampled at 1 % steps of U) and the mpmath"
@@ -69,9 +74,6 @@ class RectangularHyperbolaMethodTest {
           + " 0.3 % and d0 within 0.1 % of d_p of d_i; counted from the start of the increment"
           + " (published) c_v is biased high by more than 5 % (4 % and 10 %) or there is none")
   void correctedZeroRemovesTheBiasOfAnInstantaneousCompression() {
-    RectangularHyperbolaOptions published =
-        RectangularHyperbolaOptions.defaults()
-            .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT);
     for (double cvPerYear : new double[] {0.3, 2, 10, 60}) {
       double cv = cvPerYear / ExactCurves.YEAR;
       for (double fraction : new double[] {0.04, 0.10, 0.5, 1.0, 2.0}) {
@@ -85,12 +87,12 @@ class RectangularHyperbolaMethodTest {
         assertThat(r.zero()).isEqualTo(RectangularHyperbolaOptions.Zero.EARLY_ROOT_TIME_LINE);
         assertThat(r.warnings()).isEmpty();
         if (fraction <= 0.10) {
-          RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, published);
+          RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, PUBLISHED);
           assertThat(p.cv() / cv - 1).as("published, d_i %s d_p", fraction).isGreaterThan(0.05);
           assertThat(p.d0()).isZero();
         } else {
           try {
-            RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, published);
+            RectangularHyperbolaResult p = RectangularHyperbolaMethod.fit(c, H, PUBLISHED);
             assertThat(p.cv() / cv - 1).as("published, d_i %s d_p", fraction).isGreaterThan(0.05);
           } catch (FitException e) {
             assertThat(e.getMessage()).isNotBlank();
@@ -105,14 +107,11 @@ class RectangularHyperbolaMethodTest {
       "Without an instantaneous compression the corrected zero changes nothing that matters: c_v"
           + " within 0.3 % either way and the two within 0.1 % of each other (exact dense curves)")
   void correctedZeroWithoutOffset() {
-    RectangularHyperbolaOptions published =
-        RectangularHyperbolaOptions.defaults()
-            .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT);
     for (double cvPerYear : new double[] {0.3, 2, 10, 60}) {
       double cv = cvPerYear / ExactCurves.YEAR;
       SettlementCurve c = ExactCurves.dense(cv, 0);
       double corrected = RectangularHyperbolaMethod.fit(c, H).cv();
-      double fromStart = RectangularHyperbolaMethod.fit(c, H, published).cv();
+      double fromStart = RectangularHyperbolaMethod.fit(c, H, PUBLISHED).cv();
       assertThat(corrected / cv - 1).isCloseTo(0, within(3e-3));
       assertThat(fromStart / cv - 1).isCloseTo(0, within(3e-3));
       assertThat(corrected / fromStart - 1).isCloseTo(0, within(1e-3));
