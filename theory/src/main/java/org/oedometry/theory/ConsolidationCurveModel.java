@@ -84,12 +84,27 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    *
    * @param seconds elapsed time since loading, s; &ge; 0
    * @param cv c<sub>v</sub>, m<sup>2</sup>/s; &gt; 0
-   * @return T = c<sub>v</sub> t / H<sub>dr</sub><sup>2</sup>
-   * @throws IllegalArgumentException if the time is negative or not finite
+   * @return T = c<sub>v</sub> t / H<sub>dr</sub><sup>2</sup>; +infinity where it exceeds the double
+   *     range
+   * @throws IllegalArgumentException if the time is negative or not finite, or c<sub>v</sub> is not
+   *     finite and positive
    */
   public double timeFactor(double seconds, double cv) {
     requireTime(seconds);
-    return cv * seconds / (drainagePath * drainagePath);
+    Messages.requirePositiveFinite("c_v", cv, "m^2/s");
+    return seconds == 0.0 ? 0.0 : timeFactorRate(cv, drainagePath) * seconds;
+  }
+
+  /**
+   * c<sub>v</sub>/H<sub>dr</sub><sup>2</sup>, per second: c<sub>v</sub>/H<sup>2</sup> where
+   * H<sup>2</sup> is a normal double, otherwise (c<sub>v</sub>/H)/H, which overflows or underflows
+   * only where the quotient itself does.
+   */
+  private static double timeFactorRate(double cv, double drainagePath) {
+    final double pathSquared = drainagePath * drainagePath;
+    return pathSquared >= Double.MIN_NORMAL && pathSquared < Double.POSITIVE_INFINITY
+        ? cv / pathSquared
+        : cv / drainagePath / drainagePath;
   }
 
   /**
@@ -98,7 +113,8 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    * @param seconds elapsed time since loading, s; finite and &ge; 0
    * @param parameters the curve's parameters
    * @return d(t), m
-   * @throws IllegalArgumentException if the time is negative or not finite
+   * @throws IllegalArgumentException if the time is negative or not finite, or the rate is out of
+   *     range (see {@link #curve})
    */
   public double settlement(double seconds, CurveParameters parameters) {
     return curve(parameters).settlement(seconds);
@@ -110,7 +126,8 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    * @param seconds elapsed time since loading, s; finite and &ge; 0
    * @param parameters the curve's parameters
    * @return the secondary compression at that time, m
-   * @throws IllegalArgumentException if the time is negative or not finite
+   * @throws IllegalArgumentException if the time is negative or not finite, or the rate is out of
+   *     range (see {@link #curve})
    */
   public double secondarySettlement(double seconds, CurveParameters parameters) {
     final Curve curve = curve(parameters);
@@ -129,8 +146,8 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    * @param gradient array of length &ge; {@value #PARAMETER_COUNT} that receives the four partial
    *     derivatives (m, m, m, dimensionless)
    * @return d(t), m
-   * @throws IllegalArgumentException if the time is negative or not finite, or the array is too
-   *     short
+   * @throws IllegalArgumentException if the time is negative or not finite, the array is too short,
+   *     or the rate is out of range (see {@link #curve})
    */
   public double settlementAndGradient(
       double seconds, CurveParameters parameters, double[] gradient) {
@@ -145,7 +162,9 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
    *
    * @param parameters the curve's parameters
    * @return the curve
-   * @throws IllegalArgumentException if the parameters are null
+   * @throws IllegalArgumentException if the parameters are null, or c<sub>v</sub>/(H<sub>dr</sub>
+   *     <sup>2</sup> T<sub>s</sub>) exceeds the double range (about 10<sup>308</sup> per second,
+   *     far outside any soil)
    */
   public Curve curve(CurveParameters parameters) {
     if (parameters == null) {
@@ -180,8 +199,14 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
       this.initial = parameters.initialSettlement();
       this.primary = parameters.primarySettlement();
       this.slope = parameters.secondarySlope();
-      this.timeFactorRate = parameters.cv() / (model.drainagePath() * model.drainagePath());
+      this.timeFactorRate = timeFactorRate(parameters.cv(), model.drainagePath());
       this.onsetRatioRate = timeFactorRate / model.secondaryOnset();
+      if (onsetRatioRate == Double.POSITIVE_INFINITY) {
+        throw new IllegalArgumentException(
+            Messages.format(
+                "c_v / (H_dr^2 T_s) = %s / (%s^2 x %s) per second exceeds the double range",
+                parameters.cv(), model.drainagePath(), model.secondaryOnset()));
+      }
     }
 
     /**
@@ -218,7 +243,25 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
 
     /** log10(1 + T / T_s) at a time already checked. */
     private double secondaryShape(double seconds) {
-      return naturalLogOnePlus(onsetRatioRate * seconds) * INVERSE_LN_10;
+      final double ratio = onsetRatioRate * seconds;
+      return logOnePlusOnsetRatio(seconds, ratio) * INVERSE_LN_10;
+    }
+
+    /**
+     * ln(1 + T/T<sub>s</sub>) for a time already checked and its ratio T/T<sub>s</sub> = {@code
+     * onsetRatioRate} t. Where that product of two finite factors overflows (times beyond about
+     * 10<sup>300</sup> s) the logarithm is taken of each factor: ln c<sub>v</sub> - 2 ln H<sub>dr
+     * </sub> - ln T<sub>s</sub> + ln t, which equals ln(1 + x) to double precision there (x &gt;
+     * 10<sup>308</sup>), so the secondary term stays finite.
+     */
+    private double logOnePlusOnsetRatio(double seconds, double ratio) {
+      if (ratio == Double.POSITIVE_INFINITY) {
+        return Math.log(parameters.cv())
+            - 2.0 * Math.log(model.drainagePath())
+            - Math.log(model.secondaryOnset())
+            + Math.log(seconds);
+      }
+      return naturalLogOnePlus(ratio);
     }
 
     /**
@@ -256,10 +299,15 @@ public record ConsolidationCurveModel(double drainagePath, double secondaryOnset
         timeTimesRate = t * gradient[0];
       }
       final double ratio = onsetRatioRate * seconds;
-      final double secondaryShape = naturalLogOnePlus(ratio) * INVERSE_LN_10;
+      final double secondaryShape = logOnePlusOnsetRatio(seconds, ratio) * INVERSE_LN_10;
+      // s d log10(1 + x) / d ln c_v = s x / ((1 + x) ln 10), which is s / ln 10 where x overflows.
+      final double secondaryRate =
+          ratio == Double.POSITIVE_INFINITY
+              ? slope * INVERSE_LN_10
+              : slope * (ratio * INVERSE_LN_10) / (1.0 + ratio);
       gradient[0] = 1.0;
       gradient[1] = degree;
-      gradient[2] = primary * timeTimesRate + slope * (ratio * INVERSE_LN_10) / (1.0 + ratio);
+      gradient[2] = primary * timeTimesRate + secondaryRate;
       gradient[3] = secondaryShape;
       return initial + primary * degree + slope * secondaryShape;
     }

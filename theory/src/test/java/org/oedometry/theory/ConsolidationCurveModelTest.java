@@ -197,4 +197,78 @@ class ConsolidationCurveModelTest {
       assertThat(value).isEqualTo(MODEL.settlement(t, PARAMETERS));
     }
   }
+
+  @Test
+  @DisplayName(
+      "Over the whole double range of t, c_v, H_dr and T_s: a finite settlement and gradient, or"
+          + " an IllegalArgumentException where c_v / (H^2 T_s) itself overflows (no NaN leaves the"
+          + " library: project rule)")
+  void finiteOverTheWholeDoubleRange() {
+    qt().withFixedSeed(23L)
+        .withExamples(3000)
+        .forAll(
+            doubles().between(-320, 308.25),
+            doubles().between(-300, 300),
+            doubles().between(-300, 300),
+            doubles().between(-3, 3))
+        .checkAssert(
+            (logSeconds, logCv, logPath, logOnset) -> {
+              double seconds = Math.pow(10, logSeconds);
+              ConsolidationCurveModel model =
+                  new ConsolidationCurveModel(Math.pow(10, logPath), Math.pow(10, logOnset));
+              // log10 of c_v / (H^2 T_s), per second; the double range ends at 308.25.
+              double logRate = logCv - 2 * logPath - logOnset;
+              for (double slope : new double[] {0.0, 0.04e-3}) {
+                CurveParameters p =
+                    CurveParameters.of(0.05e-3, 0.80e-3, Math.pow(10, logCv), slope);
+                if (logRate > 308.3) {
+                  assertThatThrownBy(() -> model.settlement(seconds, p))
+                      .isInstanceOf(IllegalArgumentException.class)
+                      .hasMessageContaining("exceeds the double range");
+                  continue;
+                }
+                if (logRate > 308.2) {
+                  continue; // at the edge of the range either answer is right
+                }
+                double[] gradient = new double[4];
+                double value = model.settlementAndGradient(seconds, p, gradient);
+                assertThat(value).isFinite().isEqualTo(model.settlement(seconds, p));
+                for (double entry : gradient) {
+                  assertThat(entry).isFinite();
+                }
+                assertThat(model.secondarySettlement(seconds, p))
+                    .isFinite()
+                    .isGreaterThanOrEqualTo(0.0);
+                assertThat(model.settlement(0.0, p)).isEqualTo(0.05e-3);
+                assertThat(model.timeFactor(seconds, p.cv()))
+                    .isNotNaN()
+                    .isGreaterThanOrEqualTo(0.0);
+              }
+            });
+  }
+
+  @Test
+  @DisplayName(
+      "Where c_v t / (H^2 T_s) overflows, the secondary term continues ln(1 + x) = ln x"
+          + " [log of a product = sum of logs]")
+  void secondaryTermBeyondTheDoubleRange() {
+    // c_v / H^2 = 1e10 / 1e-4 = 1e14 per second, T_s = 2: x overflows from t of about 3.6e294 s.
+    ConsolidationCurveModel model = ConsolidationCurveModel.of(0.01);
+    CurveParameters p = CurveParameters.of(0, 1e-3, 1e10, 1e-5);
+    double justBelow = Double.MAX_VALUE / (1e14 / 2) * 0.999;
+    double justAbove = justBelow * 1.002;
+    double below = model.secondarySettlement(justBelow, p);
+    double above = model.secondarySettlement(justAbove, p);
+    // log10 of the product changes by log10(1.002 / 0.999) ... across the boundary.
+    assertThat(above - below)
+        .isCloseTo(1e-5 * Math.log10(1.002), within(1e-5 * Math.log10(1.002) * 1e-9));
+    assertThat(above)
+        .isCloseTo(
+            1e-5 * (Math.log10(1e14 / 2) + Math.log10(justAbove)), within(1e-5 * 1e-14 * 700));
+    double[] gradient = new double[4];
+    model.settlementAndGradient(justAbove, p, gradient);
+    // d(s log10(1 + x)) / d ln c_v -> s / ln 10 as x grows; the primary part is 0 at such T.
+    assertThat(gradient[2]).isEqualTo(1e-5 / Math.log(10));
+    assertThat(gradient[3]).isCloseTo(above / 1e-5, within(1e-12));
+  }
 }
