@@ -24,9 +24,10 @@ import org.oedometry.theory.CurveParameters;
  * <h2>Procedure</h2>
  *
  * <ol>
- *   <li>The reading at t = 0 (if any) is left out; it may hold the instantaneous (false)
- *       deformation, which d<sub>i</sub> absorbs. A swelling increment (final reading below the
- *       first) is fitted on the magnitude and reported in the input's sign.
+ *   <li>The reading at t = 0 (if any) is left out, with a warning ({@link
+ *       FitWarning.Kind#ZERO_READING_IGNORED}, as in the constructions); it may hold the
+ *       instantaneous (false) deformation, which d<sub>i</sub> absorbs. A swelling increment (final
+ *       reading below the first) is fitted on the magnitude and reported in the input's sign.
  *   <li>Weights ({@link FullCurveOptions.ReadingWeights}): by default each reading weighs the span
  *       of log t it represents, normalised to a mean of 1.
  *   <li>Grouping (data loggers): above 400 readings the search of the next step runs on 100 equal
@@ -403,6 +404,15 @@ public final class FullCurveMethod {
     double rSquared = total > 0 ? 1 - sumSquares / total : 0.0;
     double endFactor = cv * lastTime / pathSquared;
     List<FitWarning> warnings = new ArrayList<>();
+    if (first == 1) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.ZERO_READING_IGNORED,
+              Checks.format(
+                  "the reading at t = 0 (%s m) was left out of the fit; d0 is the fitted"
+                      + " settlement at t = 0+",
+                  allSettlements[0])));
+    }
     if (sign < 0) {
       warnings.add(
           new FitWarning(

@@ -64,6 +64,31 @@ class FullCurveMethodTest {
   }
 
   @Test
+  @DisplayName(
+      "A reading at t = 0 is left out with a warning, as in the constructions (it may hold the"
+          + " false deformation): the fit is the same bit for bit as without it")
+  void zeroReadingLeftOutWithWarning() {
+    CurveParameters truth = CurveParameters.of(0.020e-3, 0.600e-3, 2 / YEAR, 0.030e-3);
+    SettlementCurve without = curve(labSchedule(), truth, 1e-6, new SplittableRandom(5));
+    double[] t = new double[without.size() + 1];
+    double[] d = new double[without.size() + 1];
+    System.arraycopy(without.elapsedSeconds(), 0, t, 1, without.size());
+    System.arraycopy(without.settlementMetres(), 0, d, 1, without.size());
+    // A zero reading far from d_i: a large false deformation would pull any fit that used it.
+    d[0] = -0.5e-3;
+    FullCurveResult withZero = FullCurveMethod.fit(SettlementCurve.of(t, d), DRAINAGE_PATH);
+    FullCurveResult plain = FullCurveMethod.fit(without, DRAINAGE_PATH);
+    assertThat(withZero.warnings())
+        .filteredOn(w -> w.kind() == FitWarning.Kind.ZERO_READING_IGNORED)
+        .singleElement()
+        .satisfies(w -> assertThat(w.message()).contains("-5.0E-4 m").contains("t = 0"));
+    assertThat(plain.warnings()).noneMatch(w -> w.kind() == FitWarning.Kind.ZERO_READING_IGNORED);
+    assertThat(withZero.cv()).isEqualTo(plain.cv());
+    assertThat(withZero.d0()).isEqualTo(plain.d0());
+    assertThat(withZero.residuals()).isEqualTo(plain.residuals());
+  }
+
+  @Test
   @DisplayName("Noise-free lab schedule: c_v within 0.1 %, d_i within 0.1 % of d_p, s within 1 %")
   void recoversExactParameters() {
     for (double cvPerYear : new double[] {0.5, 2, 8, 30}) {
