@@ -89,11 +89,13 @@ import org.oedometry.theory.Terzaghi;
  * {@link FitException}: fewer than 2 readings in the 60-90 % range and resampling refused or not
  * allowed (a curve that ends before 60 %, or a schedule too sparse), no early root-time line for
  * the corrected zero (fewer than 3 readings before 60 %), t/&delta; against t without a positive
- * slope and intercept, or readings that end before 80 % consolidation on the c<sub>v</sub> found
- * (an incomplete curve: there the iteration can settle on the last few readings and give a
- * c<sub>v</sub> several times too large). Warnings: zero reading left out, swelling (treated by its
- * magnitude), fewer than 4 readings on the line, readings resampled, few early readings for
- * d<sub>0</sub>, readings that end before t<sub>90</sub>, choice or zero not settled.
+ * slope and intercept, t/&delta; beyond the double range (times and settlements of very different
+ * magnitudes, say 10<sup>170</sup> s over 10<sup>-200</sup> m), or readings that end before 80 %
+ * consolidation on the c<sub>v</sub> found (an incomplete curve: there the iteration can settle on
+ * the last few readings and give a c<sub>v</sub> several times too large). Warnings: zero reading
+ * left out, swelling (treated by its magnitude), fewer than 4 readings on the line, readings
+ * resampled, few early readings for d<sub>0</sub>, readings that end before t<sub>90</sub>, choice
+ * or zero not settled.
  *
  * <p>Deterministic and thread-safe. Results feed engineering decisions and must be reviewed by a
  * qualified engineer; local codes and standards govern.
@@ -243,7 +245,11 @@ public final class RectangularHyperbolaMethod {
     double t60 = Terzaghi.timeFactor(LOWER_DEGREE) * ratio;
     double t90 = Terzaghi.timeFactor(UPPER_DEGREE) * ratio;
     double d100 = d0 + line.primary();
-    if (!(cv > 0) || !Double.isFinite(cv) || !Double.isFinite(d100) || !Double.isFinite(t90)) {
+    if (!(cv > 0)
+        || !Double.isFinite(cv)
+        || !Double.isFinite(d100)
+        || !Double.isFinite(t90)
+        || !Double.isFinite(slope * t90 + intercept)) {
       throw new FitException("the hyperbola gives no finite positive c_v");
     }
     double t80 = Terzaghi.timeFactor(COMPLETE_ENOUGH) * ratio;
@@ -439,8 +445,9 @@ public final class RectangularHyperbolaMethod {
                   "the interpolated settlement at %.4g s has not moved from the corrected zero",
                   time));
         }
-        points.add(new double[] {time, time / delta, NODE_WEIGHTS[j]});
-        used.add(new PlotPoint(time, time / delta));
+        double ordinate = timeOverMovement(time, delta);
+        points.add(new double[] {time, ordinate, NODE_WEIGHTS[j]});
+        used.add(new PlotPoint(time, ordinate));
       }
       if (points.size() < 2) {
         throw new FitException(
@@ -501,6 +508,24 @@ public final class RectangularHyperbolaMethod {
     return new double[] {intercept, slope};
   }
 
+  /**
+   * t/&delta; of one point of the line, s/m, for &delta; &gt; 0; a FitException where the quotient
+   * overflows or underflows the normal doubles (times and settlements of very different
+   * magnitudes), since the line's slope and intercept could not be reported then either.
+   */
+  private static double timeOverMovement(double time, double delta) {
+    double ratio = time / delta;
+    if (!(ratio >= Double.MIN_NORMAL) || ratio == Double.POSITIVE_INFINITY) {
+      throw new FitException(
+          Checks.format(
+              "t/d at %.4g s (%.4g m from the zero) is beyond the range of double precision: the"
+                  + " times and settlements are too far apart in magnitude for the rectangular"
+                  + " hyperbola",
+              time, delta));
+    }
+    return ratio;
+  }
+
   private static int count(boolean[] chosen) {
     int count = 0;
     for (boolean c : chosen) {
@@ -522,7 +547,7 @@ public final class RectangularHyperbolaMethod {
     List<PlotPoint> used = new ArrayList<>();
     for (int i = 0; i < t.length; i++) {
       if (chosen[i]) {
-        used.add(new PlotPoint(t[i], t[i] / (d[i] - d0)));
+        used.add(new PlotPoint(t[i], timeOverMovement(t[i], d[i] - d0)));
       }
     }
     return used;
@@ -544,7 +569,7 @@ public final class RectangularHyperbolaMethod {
                   t[i], d[i], d0));
         }
         x[k] = t[i];
-        y[k] = t[i] / (d[i] - d0);
+        y[k] = timeOverMovement(t[i], d[i] - d0);
         k++;
       }
     }

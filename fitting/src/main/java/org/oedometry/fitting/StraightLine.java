@@ -21,7 +21,9 @@ public record StraightLine(double slope, double intercept, double fromX, double 
    * @param intercept intercept, m, finite
    * @param fromX left end, finite
    * @param toX right end, finite, &ge; fromX
-   * @throws IllegalArgumentException if a value is not finite or toX &lt; fromX
+   * @throws IllegalArgumentException if a value is not finite, toX &lt; fromX, or the ordinate at
+   *     either end overflows (so that {@link #start()} and {@link #end()} always give finite
+   *     points)
    */
   public StraightLine {
     Checks.requireFinite("line slope", slope, "");
@@ -32,6 +34,8 @@ public record StraightLine(double slope, double intercept, double fromX, double 
       throw new IllegalArgumentException(
           Checks.format("line end (%s) must not be before line start (%s)", toX, fromX));
     }
+    Checks.requireFinite("line ordinate at its start", intercept + slope * fromX, "m");
+    Checks.requireFinite("line ordinate at its end", intercept + slope * toX, "m");
   }
 
   /**

@@ -7,6 +7,7 @@ import static org.assertj.core.api.Assertions.within;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.synthetic.ReadingSchedules;
 import org.oedometry.theory.CurveParameters;
 import org.oedometry.theory.Terzaghi;
 
@@ -257,5 +258,23 @@ class RectangularHyperbolaMethodTest {
     assertThat(b.d100()).isCloseTo(-a.d100(), within(1e-15));
     assertThat(b.d0()).isCloseTo(-a.d0(), within(1e-15));
     assertThat(b.hasWarning(FitWarning.Kind.SWELLING_INCREMENT)).isTrue();
+  }
+
+  @Test
+  @DisplayName(
+      "Regression: an exact curve (our forward model, mpmath-checked; c_v 3 m^2/yr, the usual 14"
+          + " lab readings, so the readings are resampled) with time scaled by 1e170 and"
+          + " settlement by 1e-200: t/d overflows; a FitException that says so, not an"
+          + " IllegalArgumentException about an infinite plot ordinate")
+  void timeOverSettlementBeyondTheDoubleRange() {
+    double cv = 3 / ExactCurves.YEAR;
+    double[] t = ReadingSchedules.usualLab();
+    for (int i = 0; i < t.length; i++) {
+      t[i] *= 1e170;
+    }
+    SettlementCurve c = ExactCurves.curve(t, CurveParameters.of(0, 0.5e-203, cv / 1e170, 0));
+    assertThatThrownBy(() -> RectangularHyperbolaMethod.fit(c, H))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("too far apart in magnitude");
   }
 }

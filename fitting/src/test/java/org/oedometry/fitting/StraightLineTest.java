@@ -3,6 +3,7 @@ package org.oedometry.fitting;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
 class StraightLineTest {
@@ -19,5 +20,18 @@ class StraightLineTest {
         .hasMessage("line end (0.0) must not be before line start (3.0)");
     assertThatThrownBy(() -> new PlotPoint(1, Double.POSITIVE_INFINITY))
         .hasMessage("point ordinate (Infinity m) must be finite");
+  }
+
+  @Test
+  @DisplayName(
+      "Regression: a line whose ordinate overflows at an end (slope 1e300 out to x = 1e10) is"
+          + " refused when made, so start() and end() never throw on a line that exists")
+  void endOrdinateBeyondTheDoubleRange() {
+    assertThatThrownBy(() -> new StraightLine(1e300, 0, 0, 1e10))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("line ordinate at its end (Infinity m) must be finite");
+    assertThatThrownBy(() -> new StraightLine(1e300, 0, -1e10, 0))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage("line ordinate at its start (-Infinity m) must be finite");
   }
 }

@@ -2,6 +2,7 @@ package org.oedometry.core.compressibility;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.OptionalDouble;
 
 /**
@@ -27,7 +28,8 @@ public final class Compressibility {
    *     &gt; 0 (from one of the preconsolidation methods, or a value the engineer sets)
    * @return one value per increment, in order
    * @throws IllegalArgumentException if the curve is null or the pressure is not finite and
-   *     positive
+   *     positive, or an increment's a<sub>v</sub> or e &ndash; log&sigma;' slope is beyond the
+   *     double range (the message names the increment and its numbers)
    */
   public static List<IncrementCompressibility> increments(
       CompressionCurve curve, double preconsolidationPressure) {
@@ -41,14 +43,17 @@ public final class Compressibility {
       double s2 = curve.stress(j);
       double e1 = curve.startVoidRatio(j);
       double e2 = curve.voidRatio(j);
-      double av = -(e2 - e1) / (s2 - s1);
+      double av = representable(j, "coefficient of compressibility", -(e2 - e1) / (s2 - s1), curve);
       double mv = av / (1.0 + e1);
       OptionalDouble logMean = OptionalDouble.empty();
       OptionalDouble slope = OptionalDouble.empty();
       if (s1 > 0) {
         logMean = OptionalDouble.of(Math.sqrt(s1) * Math.sqrt(s2));
-        slope = OptionalDouble.of(-(e2 - e1) / (Math.log10(s2) - Math.log10(s1)));
+        slope =
+            OptionalDouble.of(
+                representable(j, "compression slope", -(e2 - e1) / log10Ratio(s1, s2), curve));
       }
+      double sum = s1 + s2;
       out.add(
           new IncrementCompressibility(
               j,
@@ -60,11 +65,47 @@ public final class Compressibility {
               av,
               mv,
               logMean,
-              0.5 * (s1 + s2),
+              Double.isFinite(sum) ? 0.5 * sum : 0.5 * s1 + 0.5 * s2,
               slope,
               classes.get(j)));
     }
     return List.copyOf(out);
+  }
+
+  /**
+   * log<sub>10</sub>(&sigma;'<sub>2</sub> / &sigma;'<sub>1</sub>) for positive stresses: through
+   * log1p of the relative change where they are within a factor of 2 (exact difference, no
+   * cancellation, so stresses a few ulps apart still give a non-zero change), otherwise the
+   * difference of the logarithms (no overflow of the quotient).
+   */
+  private static double log10Ratio(double s1, double s2) {
+    double ratio = s2 / s1;
+    if (ratio > 0.5 && ratio < 2) {
+      return Math.log1p((s2 - s1) / s1) / Math.log(10);
+    }
+    return Math.log10(s2) - Math.log10(s1);
+  }
+
+  /**
+   * The value, or an IllegalArgumentException naming the increment, the quantity and the numbers it
+   * comes from where it leaves the double range (stresses a few ulps apart, or void ratios and
+   * stresses of very different magnitudes).
+   */
+  private static double representable(int j, String name, double value, CompressionCurve curve) {
+    if (!Double.isFinite(value)) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "increment at index %d: the %s from void ratio %s to %s over stress %s Pa to %s Pa"
+                  + " is beyond the double range",
+              j,
+              name,
+              curve.startVoidRatio(j),
+              curve.voidRatio(j),
+              curve.startStress(j),
+              curve.stress(j)));
+    }
+    return value;
   }
 
   /**

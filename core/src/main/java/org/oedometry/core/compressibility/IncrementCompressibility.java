@@ -118,6 +118,7 @@ public record IncrementCompressibility(
    * @return dimensionless
    */
   public double meanVoidRatio() {
-    return 0.5 * (startVoidRatio + endVoidRatio);
+    double sum = startVoidRatio + endVoidRatio;
+    return Double.isFinite(sum) ? 0.5 * sum : 0.5 * startVoidRatio + 0.5 * endVoidRatio;
   }
 }

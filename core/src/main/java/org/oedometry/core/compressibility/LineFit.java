@@ -1,5 +1,6 @@
 package org.oedometry.core.compressibility;
 
+import java.util.Arrays;
 import java.util.Locale;
 
 /**
@@ -53,9 +54,13 @@ public record LineFit(double slope, double intercept, double rSquared, int point
   }
 
   /**
-   * Least-squares line through the points (x[i], y[i]), i in [from, to).
+   * Least-squares line through the points (x[i], y[i]), i in [from, to). The abscissae and the
+   * ordinates are each scaled by a power of 2 (exactly) to the order of 1 for the sums, and the
+   * line scaled back, so that the sums of squares neither overflow nor underflow: for points of
+   * ordinary size the result is bit for bit that of the unscaled sums.
    *
-   * @throws IllegalArgumentException if fewer than two points are given or all x are equal
+   * @throws IllegalArgumentException if fewer than two points are given, all x are equal, or the
+   *     slope or intercept is beyond the double range (the message names the points' ranges)
    */
   static LineFit through(double[] x, double[] y, int from, int to) {
     int n = to - from;
@@ -63,11 +68,13 @@ public record LineFit(double slope, double intercept, double rSquared, int point
       throw new IllegalArgumentException(
           String.format(Locale.ROOT, "a straight-line fit needs >= 2 points (%d given)", n));
     }
+    int shiftX = scaleShift(x, from, to);
+    int shiftY = scaleShift(y, from, to);
     double meanX = 0;
     double meanY = 0;
     for (int i = from; i < to; i++) {
-      meanX += x[i];
-      meanY += y[i];
+      meanX += Math.scalb(x[i], shiftX);
+      meanY += Math.scalb(y[i], shiftY);
     }
     meanX /= n;
     meanY /= n;
@@ -75,8 +82,8 @@ public record LineFit(double slope, double intercept, double rSquared, int point
     double sxy = 0;
     double syy = 0;
     for (int i = from; i < to; i++) {
-      double dx = x[i] - meanX;
-      double dy = y[i] - meanY;
+      double dx = Math.scalb(x[i], shiftX) - meanX;
+      double dy = Math.scalb(y[i], shiftY) - meanY;
       sxx += dx * dx;
       sxy += dx * dy;
       syy += dy * dy;
@@ -84,13 +91,16 @@ public record LineFit(double slope, double intercept, double rSquared, int point
     if (!(sxx > 0)) {
       throw new IllegalArgumentException(
           String.format(
-              Locale.ROOT, "a straight-line fit needs distinct abscissae (all %s)", meanX));
+              Locale.ROOT,
+              "a straight-line fit needs distinct abscissae (all %s)",
+              Math.scalb(meanX, -shiftX)));
     }
-    double slope = sxy / sxx;
-    double intercept = meanY - slope * meanX;
+    double scaledSlope = sxy / sxx;
+    double scaledIntercept = meanY - scaledSlope * meanX;
     double rss = 0;
     for (int i = from; i < to; i++) {
-      double r = y[i] - (intercept + slope * x[i]);
+      double r =
+          Math.scalb(y[i], shiftY) - (scaledIntercept + scaledSlope * Math.scalb(x[i], shiftX));
       rss += r * r;
     }
     double r2 = syy > 0 ? 1.0 - rss / syy : 1.0;
@@ -98,7 +108,30 @@ public record LineFit(double slope, double intercept, double rSquared, int point
     if (n == 2) {
       r2 = 1.0;
     }
+    double slope = Math.scalb(scaledSlope, shiftX - shiftY);
+    double intercept = Math.scalb(scaledIntercept, -shiftY);
+    if (!Double.isFinite(slope) || !Double.isFinite(intercept)) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "the straight line through %d points (x from %s to %s, y from %s to %s) has a slope"
+                  + " or intercept beyond the double range",
+              n,
+              Arrays.stream(x, from, to).min().orElseThrow(),
+              Arrays.stream(x, from, to).max().orElseThrow(),
+              Arrays.stream(y, from, to).min().orElseThrow(),
+              Arrays.stream(y, from, to).max().orElseThrow()));
+    }
     return new LineFit(slope, intercept, r2, n);
+  }
+
+  /** The power of 2 that brings the largest magnitude in [from, to) to [1, 2); 0 if all are 0. */
+  private static int scaleShift(double[] values, int from, int to) {
+    double largest = 0;
+    for (int i = from; i < to; i++) {
+      largest = Math.max(largest, Math.abs(values[i]));
+    }
+    return largest > 0 ? -Math.getExponent(largest) : 0;
   }
 
   /** Residual sum of squares of this line over the points (x[i], y[i]), i in [from, to). */

@@ -47,7 +47,8 @@ public final class SecondaryCompression {
    * @param solidsHeight H<sub>s</sub>, m; finite, &gt; 0
    * @param endOfPrimaryVoidRatio e<sub>p</sub>, dimensionless; finite, &gt; 0
    * @return the indices; the ratio is absent with the reason "no compression index given"
-   * @throws IllegalArgumentException if an argument is out of range
+   * @throws IllegalArgumentException if an argument is out of range, or C<sub>&alpha;e</sub> =
+   *     &Delta;H<sub>cycle</sub> / H<sub>s</sub> is beyond the double range
    */
   public static SecondaryCompressionResult of(
       double settlementPerLogCycle, double solidsHeight, double endOfPrimaryVoidRatio) {
@@ -63,7 +64,8 @@ public final class SecondaryCompression {
    * @param compressionIndex C<sub>c</sub> at the increment's stress, dimensionless; finite
    * @return the indices and the ratio (absent with a reason when C<sub>c</sub> or
    *     C<sub>&alpha;e</sub> is not positive)
-   * @throws IllegalArgumentException if an argument is out of range
+   * @throws IllegalArgumentException if an argument is out of range, or C<sub>&alpha;e</sub> =
+   *     &Delta;H<sub>cycle</sub> / H<sub>s</sub> is beyond the double range
    */
   public static SecondaryCompressionResult of(
       double settlementPerLogCycle,
@@ -83,6 +85,15 @@ public final class SecondaryCompression {
     Checks.positive("height of solids", solidsHeight, " m");
     Checks.positive("end-of-primary void ratio", endOfPrimaryVoidRatio, "");
     double cAlpha = settlementPerLogCycle / solidsHeight;
+    if (!Double.isFinite(cAlpha)) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "the secondary compression index from %s m per log cycle over a height of solids of"
+                  + " %s m is beyond the double range",
+              settlementPerLogCycle,
+              solidsHeight));
+    }
     double cAlphaEps = cAlpha / (1.0 + endOfPrimaryVoidRatio);
     List<CompressibilityWarning> warnings = new ArrayList<>();
     Derived<Double> ratio;

@@ -39,8 +39,9 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
    *
    * @param initialHeight specimen height H<sub>0</sub> at the start of the test, m; finite, &gt; 0
    * @param solidsHeight height of solids H<sub>s</sub>, m; finite, &gt; 0 and &lt; H<sub>0</sub>
-   * @throws IllegalArgumentException if a height is not finite and positive, or if the height of
-   *     solids is not below the initial height (which would mean e<sub>0</sub> &le; 0)
+   * @throws IllegalArgumentException if a height is not finite and positive, if the height of
+   *     solids is not below the initial height (which would mean e<sub>0</sub> &le; 0), or if
+   *     H<sub>0</sub> / H<sub>s</sub> is beyond the double range
    */
   public SpecimenPhases {
     Checks.positive("initial height", initialHeight, " m");
@@ -52,6 +53,15 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
               "height of solids (%s m) must be below the initial height (%s m)",
               solidsHeight,
               initialHeight));
+    }
+    if (!Double.isFinite(initialHeight / solidsHeight)) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "initial height (%s m) over height of solids (%s m) is beyond the double range: the"
+                  + " initial void ratio cannot be represented",
+              initialHeight,
+              solidsHeight));
     }
   }
 
@@ -167,7 +177,8 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
    * @param settlement &Delta;H from the start of the test, m, positive for compression; finite and
    *     such that the void ratio stays &gt; 0 (&Delta;H &lt; H<sub>0</sub> &minus; H<sub>s</sub>)
    * @return e, dimensionless, &gt; 0
-   * @throws IllegalArgumentException if the settlement is not finite or would leave no voids
+   * @throws IllegalArgumentException if the settlement is not finite or would leave no voids, or
+   *     the void ratio is beyond the double range (a swelling of the order of 10<sup>308</sup> m)
    */
   public double voidRatio(double settlement) {
     Checks.finite("settlement", settlement, " m");
@@ -179,7 +190,18 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
               settlement,
               initialHeight - solidsHeight));
     }
-    return (initialHeight - settlement) / solidsHeight - 1.0;
+    double voidRatio = (initialHeight - settlement) / solidsHeight - 1.0;
+    if (!Double.isFinite(voidRatio)) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "void ratio after a settlement of %s m (initial height %s m, height of solids %s m)"
+                  + " is beyond the double range",
+              settlement,
+              initialHeight,
+              solidsHeight));
+    }
+    return voidRatio;
   }
 
   /**
@@ -187,10 +209,21 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
    *
    * @param settlement &Delta;H from the start of the test, m; finite
    * @return &epsilon;, dimensionless
-   * @throws IllegalArgumentException if the settlement is not finite
+   * @throws IllegalArgumentException if the settlement is not finite, or the strain is beyond the
+   *     double range
    */
   public double axialStrain(double settlement) {
     Checks.finite("settlement", settlement, " m");
-    return settlement / initialHeight;
+    double strain = settlement / initialHeight;
+    if (!Double.isFinite(strain)) {
+      throw new IllegalArgumentException(
+          String.format(
+              Locale.ROOT,
+              "axial strain of a settlement of %s m over an initial height of %s m is beyond the"
+                  + " double range",
+              settlement,
+              initialHeight));
+    }
+    return strain;
   }
 }

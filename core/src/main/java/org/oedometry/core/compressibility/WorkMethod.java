@@ -30,9 +30,10 @@ import java.util.Optional;
  * relative error depends on each increment's load ratio and is largest over an increment that
  * straddles the break, and the rounding of a smooth transition; in the tests both push it above the
  * break. See the tests for the tolerance achieved. Absent when the envelope has fewer than four
- * loaded points or no split gives a steeper late line. Reference: {@link
- * PreconsolidationMethod#BECKER_WORK}. Results feed engineering decisions: they must be reviewed by
- * a qualified engineer, and local codes and standards govern. Stateless and thread-safe.
+ * loaded points, the work is beyond the double range (stresses near 10<sup>308</sup> Pa), or no
+ * split gives a steeper late line. Reference: {@link PreconsolidationMethod#BECKER_WORK}. Results
+ * feed engineering decisions: they must be reviewed by a qualified engineer, and local codes and
+ * standards govern. Stateless and thread-safe.
  */
 public final class WorkMethod {
 
@@ -78,7 +79,22 @@ public final class WorkMethod {
     for (int i = 0; i < n; i++) {
       double stress = env.stress[i + offset];
       double strain = (e0 - env.voidRatio[i + offset]) / (1.0 + e0);
-      work += 0.5 * (previousStress + stress) * (strain - previousStrain);
+      double sum = previousStress + stress;
+      double meanStress = Double.isFinite(sum) ? 0.5 * sum : 0.5 * previousStress + 0.5 * stress;
+      work += meanStress * (strain - previousStrain);
+      if (!Double.isFinite(work)) {
+        return PreconsolidationEstimate.absent(
+            method,
+            String.format(
+                Locale.ROOT,
+                "the work per unit volume up to %s Pa is beyond the double range",
+                stress),
+            AXES,
+            List.of(),
+            List.of(),
+            used,
+            warnings);
+      }
       x[i] = stress;
       w[i] = work;
       previousStress = stress;

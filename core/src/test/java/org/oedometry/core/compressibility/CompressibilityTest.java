@@ -107,4 +107,45 @@ class CompressibilityTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("compression curve must not be null");
   }
+
+  @Test
+  @DisplayName(
+      "Regression: stresses one ulp apart (1e5 Pa and the next double) give a finite e-log"
+          + " slope, -de / log10(1 + x) = -de ln 10 / x to first order in x = ulp / stress [series"
+          + " of log10(1 + x)], no longer infinity")
+  void slopeOfStressesOneUlpApart() {
+    double s1 = 1e5;
+    double s2 = Math.nextUp(s1);
+    CompressionCurve c = CompressionCurve.of(1.0, new double[] {s1, s2}, new double[] {0.9, 0.8});
+    double x = (s2 - s1) / s1;
+    assertThat(Compressibility.increments(c, s1).get(1).compressionSlope().getAsDouble())
+        .isCloseTo(0.1 * Math.log(10) / x, withinPercentage(1e-10));
+  }
+
+  @Test
+  @DisplayName(
+      "Regression: a_v beyond the double range (e 0.9 to 0.8 over 1e-300 Pa and the next double):"
+          + " an IllegalArgumentException naming the increment and its numbers, not 'Infinity'")
+  void coefficientOfCompressibilityBeyondTheDoubleRange() {
+    double s1 = 1e-300;
+    CompressionCurve c =
+        CompressionCurve.of(1.0, new double[] {s1, Math.nextUp(s1)}, new double[] {0.9, 0.8});
+    assertThatThrownBy(() -> Compressibility.increments(c, s1))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "increment at index 1: the coefficient of compressibility from void ratio 0.9 to 0.8"
+                + " over stress 1.0E-300 Pa to 1.0000000000000002E-300 Pa is beyond the double"
+                + " range");
+  }
+
+  @Test
+  @DisplayName(
+      "Regression: stresses near the top of the double range (1.6e308 and 1.7e308 Pa): the"
+          + " arithmetic mean is their mean, 1.65e308 Pa, not an overflow of their sum")
+  void arithmeticMeanOfHugeStresses() {
+    CompressionCurve c =
+        CompressionCurve.of(1.0, new double[] {1.6e308, 1.7e308}, new double[] {0.9, 0.8});
+    assertThat(Compressibility.increments(c, 1.6e308).get(1).arithmeticMeanStress())
+        .isCloseTo(1.65e308, withinPercentage(1e-12));
+  }
 }

@@ -53,4 +53,23 @@ class LineFitTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("a straight-line fit needs distinct abscissae (all 2.0)");
   }
+
+  @Test
+  @DisplayName(
+      "Regression: ordinates near 1e307, whose squares overflow, fit as the same points divided by"
+          + " 1e306 do: y = (10, 6, 0) e306 at x = 0, 1, 2 gives slope -5e306, intercept 31/3 e306"
+          + " and R^2 = 75/76 (exact rational arithmetic by hand), no longer R^2 = NaN; a slope"
+          + " beyond the double range is named with the points' ranges")
+  void ordinatesNearTheTopOfTheDoubleRange() {
+    LineFit line = LineFit.through(new double[] {0, 1, 2}, new double[] {1e307, 6e306, 0}, 0, 3);
+    assertThat(line.slope()).isCloseTo(-5e306, within(1e-14 * 5e306));
+    assertThat(line.intercept()).isCloseTo(31.0 / 3 * 1e306, within(1e-14 * 1e307));
+    assertThat(line.rSquared()).isCloseTo(75.0 / 76, within(1e-14));
+    assertThatThrownBy(
+            () -> LineFit.through(new double[] {0, 1e-10}, new double[] {0, 1e300}, 0, 2))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "the straight line through 2 points (x from 0.0 to 1.0E-10, y from 0.0 to 1.0E300) has"
+                + " a slope or intercept beyond the double range");
+  }
 }

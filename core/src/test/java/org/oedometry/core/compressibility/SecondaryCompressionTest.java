@@ -67,4 +67,16 @@ class SecondaryCompressionTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("compression index (NaN) must be finite");
   }
+
+  @Test
+  @DisplayName(
+      "Regression: C_alpha_e = 1 m per cycle over a height of solids of 1e-310 m is beyond the"
+          + " double range: an IllegalArgumentException naming both numbers, not 'Infinity'")
+  void indexBeyondTheDoubleRange() {
+    assertThatThrownBy(() -> SecondaryCompression.of(1.0, 1e-310, 1.0))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "the secondary compression index from 1.0 m per log cycle over a height of solids of"
+                + " 1.0E-310 m is beyond the double range");
+  }
 }

@@ -90,4 +90,26 @@ class SpecimenPhasesTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("settlement (NaN m) must be finite");
   }
+
+  @Test
+  @DisplayName(
+      "Regression: heights whose ratio, a void ratio or a strain is beyond the double range are"
+          + " refused with the numbers named, instead of returning infinity")
+  void valuesBeyondTheDoubleRange() {
+    assertThatThrownBy(() -> SpecimenPhases.of(1e300, 1e-10))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "initial height (1.0E300 m) over height of solids (1.0E-10 m) is beyond the double"
+                + " range: the initial void ratio cannot be represented");
+    assertThatThrownBy(() -> SpecimenPhases.of(0.02, 0.01).voidRatio(-1e307))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "void ratio after a settlement of -1.0E307 m (initial height 0.02 m, height of solids"
+                + " 0.01 m) is beyond the double range");
+    assertThatThrownBy(() -> SpecimenPhases.of(1e-300, 1e-301).axialStrain(1e10))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "axial strain of a settlement of 1.0E10 m over an initial height of 1.0E-300 m is"
+                + " beyond the double range");
+  }
 }

@@ -88,4 +88,22 @@ class WorkMethodTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("compression curve must not be null");
   }
+
+  @Test
+  @DisplayName(
+      "Regression: stresses near the top of the double range (1e307 to 1.7e308 Pa), whose sums"
+          + " overflow: an estimate or an absence with a reason, no longer an"
+          + " IllegalArgumentException 'slope (NaN)'")
+  void stressesNearTheTopOfTheDoubleRange() {
+    CompressionCurve c =
+        CompressionCurve.of(
+            1.0,
+            new double[] {1e307, 1.2e308, 1.4e308, 1.6e308, 1.7e308},
+            new double[] {0.9, 0.85, 0.7, 0.55, 0.4});
+    PreconsolidationEstimate estimate = WorkMethod.estimate(c);
+    assertThat(
+            estimate.preconsolidationPressure().isPresent() || !estimate.absenceReason().isEmpty())
+        .isTrue();
+    assertThat(estimate.points()).allMatch(p -> Double.isFinite(p.x()) && Double.isFinite(p.y()));
+  }
 }

@@ -290,8 +290,9 @@ public final class WeightedLeastSquares {
    * @return the solution
    * @throws IllegalArgumentException if lengths disagree, a value is not finite, a weight is not
    *     positive, or there are not more observations than parameters
-   * @throws FitException if the optimiser does not converge, the model returns a non-finite value,
-   *     or the parameters are not identifiable (singular normal matrix)
+   * @throws FitException if the optimiser does not converge, the model returns a non-finite value
+   *     or a step gives a non-finite parameter (never passed to the model), or the parameters are
+   *     not identifiable (singular normal matrix)
    */
   public Solution solve(
       Model model,
@@ -312,6 +313,7 @@ public final class WeightedLeastSquares {
     MultivariateJacobianFunction function =
         point -> {
           double[] parameters = point.toArray();
+          requireFiniteTrial(parameters);
           double[] values = new double[n];
           double[][] jacobian = new double[n][p];
           model.evaluate(parameters, values, jacobian);
@@ -392,8 +394,9 @@ public final class WeightedLeastSquares {
    * @return the solution, with the same statistics as {@link #solve}
    * @throws IllegalArgumentException if lengths disagree, a value is not finite, a weight is not
    *     positive, or there are not more observations than parameters
-   * @throws FitException if the optimiser does not converge, the model returns a non-finite value,
-   *     or the parameters are not identifiable (singular normal matrix)
+   * @throws FitException if the optimiser does not converge, the model returns a non-finite value
+   *     or a step gives a non-finite parameter (never passed to the model), or the parameters are
+   *     not identifiable (singular normal matrix)
    */
   public Solution solveStreamed(
       PointModel model,
@@ -565,6 +568,19 @@ public final class WeightedLeastSquares {
     }
   }
 
+  /**
+   * Stops a trial point with a NaN or infinite parameter (a step of the optimiser that overflowed)
+   * before the model sees it: a model may reject such parameters with its own exception, which
+   * would otherwise escape from inside Commons Math untranslated.
+   */
+  private static void requireFiniteTrial(double[] parameters) {
+    for (double value : parameters) {
+      if (!Double.isFinite(value)) {
+        throw new NonFiniteModelException();
+      }
+    }
+  }
+
   private static void requireFinite(double[] parameters) {
     for (double value : parameters) {
       if (!Double.isFinite(value)) {
@@ -650,6 +666,7 @@ public final class WeightedLeastSquares {
     }
 
     static Pass over(PointModel model, double[] observed, double[] weights, double[] parameters) {
+      requireFiniteTrial(parameters);
       int n = observed.length;
       int p = parameters.length;
       if (p <= 4) {
@@ -1006,6 +1023,10 @@ public final class WeightedLeastSquares {
               value,
               index,
               Arrays.toString(parameters)));
+    }
+
+    NonFiniteModelException() {
+      super("the least-squares step overflowed: no finite parameters to try next");
     }
   }
 }

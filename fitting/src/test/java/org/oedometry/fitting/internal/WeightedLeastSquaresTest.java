@@ -567,4 +567,38 @@ class WeightedLeastSquaresTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("standard error fraction (0.0) must be in (0, 1]");
   }
+
+  @Test
+  @DisplayName(
+      "Regression: y = a (1 - exp(-b x)) on x = 1..6 with y near 1e155 (0.1 % noise) overflows"
+          + " the Levenberg-Marquardt step to NaN parameters; a model that rejects them with its"
+          + " own IllegalArgumentException (as CurveParameters does) no longer leaks it from inside"
+          + " Commons Math: FitException, plain and streamed")
+  void nonFiniteTrialParametersNeverReachTheModel() {
+    double[] x = {1, 2, 3, 4, 5, 6};
+    double[] y = new double[x.length];
+    double[] weights = new double[x.length];
+    for (int i = 0; i < x.length; i++) {
+      y[i] = 1e155 * (1 - Math.exp(-x[i]) + (i % 2 == 0 ? 1e-3 : -1e-3));
+      weights[i] = 1;
+    }
+    WeightedLeastSquares.PointModel model =
+        (i, p, gradient) -> {
+          if (!Double.isFinite(p[0]) || !Double.isFinite(p[1])) {
+            throw new IllegalArgumentException("parameters must be finite");
+          }
+          double e = Math.exp(-p[1] * x[i]);
+          gradient[0] = 1 - e;
+          gradient[1] = p[0] * x[i] * e;
+          return p[0] * (1 - e);
+        };
+    double[] start = {0.5e155, 2};
+    WeightedLeastSquares solver = WeightedLeastSquares.withDefaults();
+    assertThatThrownBy(() -> solver.solve(model.asModel(), y, weights, start, null))
+        .isInstanceOf(FitException.class)
+        .hasMessageStartingWith("the least-squares step overflowed");
+    assertThatThrownBy(() -> solver.solveStreamed(model, y, weights, start, null))
+        .isInstanceOf(FitException.class)
+        .hasMessageStartingWith("the least-squares step overflowed");
+  }
 }

@@ -1,0 +1,672 @@
+package org.oedometry.core;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.doubles;
+import static org.quicktheories.generators.SourceDSL.integers;
+import static org.quicktheories.generators.SourceDSL.longs;
+
+import java.lang.reflect.InvocationTargetException;
+import java.lang.reflect.Method;
+import java.lang.reflect.Modifier;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collection;
+import java.util.Comparator;
+import java.util.IdentityHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
+import java.util.OptionalLong;
+import java.util.SplittableRandom;
+import java.util.function.Supplier;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.oedometry.core.compressibility.BilinearVolumeMethod;
+import org.oedometry.core.compressibility.CasagrandeMethod;
+import org.oedometry.core.compressibility.Compressibility;
+import org.oedometry.core.compressibility.CompressionCurve;
+import org.oedometry.core.compressibility.CompressionIndex;
+import org.oedometry.core.compressibility.DeformationBasis;
+import org.oedometry.core.compressibility.IncrementCompressibility;
+import org.oedometry.core.compressibility.IncrementDeformation;
+import org.oedometry.core.compressibility.IncrementPermeability;
+import org.oedometry.core.compressibility.PachecoSilvaMethod;
+import org.oedometry.core.compressibility.Permeability;
+import org.oedometry.core.compressibility.PermeabilityChangeIndex;
+import org.oedometry.core.compressibility.SecondaryCompression;
+import org.oedometry.core.compressibility.SpecimenPhases;
+import org.oedometry.core.compressibility.WorkMethod;
+import org.oedometry.theory.ConsolidationCurveModel;
+import org.oedometry.theory.CurveParameters;
+import org.quicktheories.api.Pair;
+import org.quicktheories.core.Gen;
+import org.quicktheories.generators.Generate;
+
+/**
+ * The rule "no NaN or infinity ever leaves the library; bad input gets an IllegalArgumentException
+ * naming the field, the index and the value", checked on {@link SettlementCurve} and on the entry
+ * points of the compressibility package with valid but extreme per-increment values.
+ *
+ * <p>Settlement curves: exact Terzaghi curves from {@link ConsolidationCurveModel} of the theory
+ * module (its accuracy is proven against mpmath there), used as an independent generator, with time
+ * scaled by 10<sup>-200</sup> to 10<sup>200</sup> and settlement by 10<sup>-200</sup> to
+ * 10<sup>200</sup> of either sign, offsets, repeated settlements, 2 to 2000 readings. Compression
+ * curves: stresses and void ratios at scales 10<sup>-200</sup> to 10<sup>200</sup> and at the edges
+ * of the double range (10<sup>-308</sup>, 10<sup>308</sup>), loading, unloading, consecutive
+ * stresses one ulp apart, repeated void ratios, c<sub>v</sub> from 10<sup>-200</sup> to
+ * 10<sup>200</sup> m<sup>2</sup>/s.
+ *
+ * <p>For each call: a result whose every number, walked through all its public accessors (nested
+ * records, lists, optionals), is finite, or an IllegalArgumentException with a message that does
+ * not quote NaN or infinity (every input is finite, so such a value was made inside the library).
+ */
+class ExtremeInputsProperties {
+
+  /** Exponents from -200 to 200, the two ends and 0 drawn often. */
+  private static Gen<Double> exponents() {
+    return doubles()
+        .between(-200, 200)
+        .mix(Generate.pick(List.of(-200.0, 200.0, 0.0, -100.0, 100.0)), 30);
+  }
+
+  /**
+   * For stresses and heights: exponents from -200 to 200, and the edges of the double range
+   * (10<sup>-308</sup>, below the smallest normal double, to 10<sup>308</sup>) drawn often.
+   */
+  private static Gen<Double> wideExponents() {
+    return doubles()
+        .between(-200, 200)
+        .mix(Generate.pick(List.of(-308.0, -307.0, 307.0, 308.0, 0.0)), 30);
+  }
+
+  /**
+   * For void ratios: exponents from -200 to 200, and 10<sup>-308</sup>, 10<sup>-307</sup> and
+   * 10<sup>300</sup> drawn often (nearer the top of the double range the ordinates of the
+   * preconsolidation constructions' straight lines overflow: not covered here).
+   */
+  private static Gen<Double> voidRatioExponents() {
+    return doubles().between(-200, 200).mix(Generate.pick(List.of(-308.0, -307.0, 300.0, 0.0)), 30);
+  }
+
+  /** 2 to 2000 readings, mostly few. */
+  private static Gen<Integer> readingCounts() {
+    return Generate.frequency(
+        Pair.of(4, integers().between(2, 40)),
+        Pair.of(4, integers().between(41, 200)),
+        Pair.of(1, integers().between(201, 2000)));
+  }
+
+  // ---------------------------------------------------------------------------------------------
+  // SettlementCurve
+
+  /** One generated settlement curve, rebuilt from these numbers. */
+  record Readings(int count, double log10TimeScale, double log10SettlementScale, long seed) {
+
+    double[] times() {
+      SplittableRandom random = new SplittableRandom(seed);
+      double scale = Math.pow(10, log10TimeScale);
+      double[] t = new double[count];
+      boolean zero = random.nextBoolean();
+      double unit = zero ? 0 : Math.pow(10, -4 + 3 * random.nextDouble());
+      for (int i = 0; i < count; i++) {
+        t[i] = scale * unit;
+        unit += Math.pow(10, -4 + 4 * random.nextDouble()); // irregular steps
+      }
+      for (int i = 1; i < count; i++) {
+        if (!(t[i] > t[i - 1])) {
+          t[i] = Math.nextUp(t[i - 1]);
+        }
+      }
+      return t;
+    }
+
+    double[] settlements(double[] t) {
+      SplittableRandom random = new SplittableRandom(~seed);
+      double movement = (random.nextBoolean() ? 1 : -1) * Math.pow(10, log10SettlementScale);
+      double offset =
+          random.nextBoolean()
+              ? 0
+              : (random.nextBoolean() ? 1 : -1)
+                  * Math.pow(10, Math.min(300, log10SettlementScale + 200 * random.nextDouble()));
+      double timeScale = t[count - 1] > 0 ? t[count - 1] : 1;
+      ConsolidationCurveModel.Curve curve =
+          ConsolidationCurveModel.of(1)
+              .curve(
+                  CurveParameters.of(
+                      movement * 0.1 * random.nextDouble(),
+                      movement,
+                      (0.3 + 30 * random.nextDouble()) / timeScale,
+                      movement * 0.05 * random.nextDouble()));
+      double step = movement * Math.pow(10, -3 + 2 * random.nextDouble());
+      boolean rounded = random.nextInt(3) == 0;
+      double[] d = new double[count];
+      for (int i = 0; i < count; i++) {
+        d[i] = curve.settlement(t[i]);
+        if (rounded) {
+          d[i] = step * Math.rint(d[i] / step); // repeated settlements
+        }
+        d[i] += offset;
+      }
+      return d;
+    }
+
+    @Override
+    public String toString() {
+      return String.format(
+          Locale.ROOT,
+          "Readings[%d, time x 1e%.3f, settlement x 1e%.3f, seed %d]",
+          count,
+          log10TimeScale,
+          log10SettlementScale,
+          seed);
+    }
+  }
+
+  private static Gen<Readings> readings() {
+    return readingCounts().zip(exponents(), exponents(), longs().all(), Readings::new);
+  }
+
+  @Test
+  @DisplayName(
+      "SettlementCurve.of on extreme exact Terzaghi curves (ConsolidationCurveModel as independent"
+          + " generator): accepted, every accessor gives back the readings bit for bit, all finite")
+  void settlementCurveKeepsExtremeReadings() {
+    qt().withFixedSeed(20261221L)
+        .withExamples(400)
+        .forAll(readings())
+        .checkAssert(
+            r -> {
+              double[] t = r.times();
+              double[] d = r.settlements(t);
+              SettlementCurve curve = SettlementCurve.of(t, d);
+              assertThat(curve.elapsedSeconds()).as("%s", r).containsExactly(t);
+              assertThat(curve.settlementMetres()).as("%s", r).containsExactly(d);
+              for (int i = 0; i < t.length; i++) {
+                assertThat(curve.elapsedSeconds(i)).isEqualTo(t[i]);
+                assertThat(curve.settlementMetres(i)).isEqualTo(d[i]);
+              }
+              assertThat(curve.durationSeconds()).isEqualTo(t[t.length - 1]);
+              assertThat(curve.finalSettlementMetres()).isEqualTo(d[d.length - 1]);
+              assertThat(curve.maximumSettlementMetres())
+                  .isEqualTo(Arrays.stream(d).max().orElseThrow());
+              assertThat(curve).isEqualTo(SettlementCurve.of(t.clone(), d.clone()));
+              assertThat(notFinite(curve)).as("%s", r).isEmpty();
+            });
+  }
+
+  @Test
+  @DisplayName(
+      "SettlementCurve.of with one bad value (NaN, an infinity, a negative time, a time not after"
+          + " the one before) at any index of an extreme curve: IllegalArgumentException naming"
+          + " the index and the value")
+  void settlementCurveNamesTheBadReading() {
+    qt().withFixedSeed(20261222L)
+        .withExamples(400)
+        .forAll(readings(), integers().between(0, 6), integers().between(0, 1999))
+        .checkAssert(
+            (r, kind, where) -> {
+              double[] t = r.times();
+              double[] d = r.settlements(t);
+              int i = where % t.length;
+              double bad;
+              switch (kind) {
+                case 0 -> bad = t[i] = Double.NaN;
+                case 1 -> bad = t[i] = Double.POSITIVE_INFINITY;
+                case 2 -> bad = t[i] = -Math.max(Double.MIN_VALUE, t[i]);
+                case 3 -> bad = d[i] = Double.NaN;
+                case 4 -> bad = d[i] = Double.NEGATIVE_INFINITY;
+                case 5 -> {
+                  i = Math.max(1, i);
+                  bad = t[i] = t[i - 1];
+                }
+                default -> {
+                  i = Math.max(1, i);
+                  bad = t[i] = Math.nextDown(t[i - 1]);
+                  if (bad < 0) {
+                    bad = t[i] = t[i - 1];
+                  }
+                }
+              }
+              int index = i;
+              double value = bad;
+              assertThatThrownBy(() -> SettlementCurve.of(t, d))
+                  .as("%s, kind %d at %d", r, kind, index)
+                  .isInstanceOf(IllegalArgumentException.class)
+                  .hasMessageContaining("index " + index + " (" + value);
+            });
+  }
+
+  // ---------------------------------------------------------------------------------------------
+  // The compressibility package
+
+  /** One generated compression test: per-increment stresses, void ratios, settlements and c_v. */
+  record Increments(int count, double log10StressScale, double log10VoidRatioScale, long seed) {
+
+    /** Seating stress, then one stress per increment, Pa. */
+    double[] stresses() {
+      SplittableRandom random = new SplittableRandom(seed);
+      double scale = Math.pow(10, log10StressScale);
+      double[] s = new double[count + 1];
+      s[0] = random.nextBoolean() ? 0 : scale * 0.5 * random.nextDouble();
+      s[1] = Math.min(Double.MAX_VALUE, scale * (1 + random.nextDouble()));
+      for (int j = 2; j <= count; j++) {
+        double u = random.nextDouble();
+        double next;
+        if (u < 0.65) {
+          next = s[j - 1] * Math.pow(10, 0.05 + 0.55 * random.nextDouble()); // loading
+        } else if (u < 0.8) {
+          next = s[j - 1] * Math.pow(10, -0.05 - 0.55 * random.nextDouble()); // unloading
+        } else if (u < 0.9) {
+          next = Math.nextUp(s[j - 1]); // one ulp more
+        } else if (u < 0.95) {
+          next = Math.nextDown(s[j - 1]); // one ulp less
+        } else {
+          next = s[j - 1] * Math.pow(10, 1 + 20 * random.nextDouble()); // a large jump
+        }
+        s[j] = Double.isFinite(next) && next > 0 && next != s[j - 1] ? next : s[j - 1] * 1.5;
+        if (!Double.isFinite(s[j])) {
+          s[j] = s[j - 1] / 3;
+        }
+      }
+      return s;
+    }
+
+    /** e<sub>0</sub>, then one void ratio per increment: falling on loading, repeated at times. */
+    double[] voidRatios(double[] s) {
+      SplittableRandom random = new SplittableRandom(~seed);
+      double[] e = new double[count + 1];
+      e[0] =
+          Math.min(Double.MAX_VALUE, Math.pow(10, log10VoidRatioScale) * (1 + random.nextDouble()));
+      for (int j = 1; j <= count; j++) {
+        double u = random.nextDouble();
+        if (u < 0.1) {
+          e[j] = e[j - 1];
+        } else if (s[j] > s[j - 1]) {
+          e[j] = e[j - 1] * (1 - 0.3 * random.nextDouble());
+        } else {
+          e[j] = Math.min(Double.MAX_VALUE, e[j - 1] * (1 + 0.05 * random.nextDouble()));
+        }
+        if (!(e[j] > 0)) {
+          e[j] = e[j - 1];
+        }
+      }
+      return e;
+    }
+
+    /** c<sub>v</sub> of each increment, m<sup>2</sup>/s: 10<sup>-200</sup> to 10<sup>200</sup>. */
+    double[] cv() {
+      SplittableRandom random = new SplittableRandom(seed * 31 + 7);
+      double[] cv = new double[count];
+      for (int j = 0; j < count; j++) {
+        cv[j] = Math.pow(10, -200 + 400 * random.nextDouble());
+      }
+      return cv;
+    }
+
+    @Override
+    public String toString() {
+      return String.format(
+          Locale.ROOT,
+          "Increments[%d, stress x 1e%.3f, void ratio x 1e%.3f, seed %d]",
+          count,
+          log10StressScale,
+          log10VoidRatioScale,
+          seed);
+    }
+  }
+
+  private static Gen<Increments> increments() {
+    return integers()
+        .between(1, 40)
+        .zip(wideExponents(), voidRatioExponents(), longs().all(), Increments::new);
+  }
+
+  /** A call on valid input: a finite result, or an IllegalArgumentException that is not a leak. */
+  private static void finiteOrClean(Object input, String call, Supplier<Object> supplier) {
+    Object result;
+    try {
+      result = supplier.get();
+    } catch (IllegalArgumentException e) {
+      assertThat(e.getMessage())
+          .as("%s on %s: %s", call, input, e)
+          .isNotBlank()
+          .doesNotContain("NaN")
+          .doesNotContain("Infinity");
+      return;
+    }
+    assertThat(notFinite(result)).as("%s on %s", call, input).isEmpty();
+  }
+
+  @Test
+  @DisplayName(
+      "Compression curve, per-increment compressibility, C_c / C_r fits and the four"
+          + " preconsolidation constructions on extreme stresses and void ratios: finite or a clean"
+          + " IllegalArgumentException")
+  void compressionCurveEntryPoints() {
+    qt().withFixedSeed(20261223L)
+        .withExamples(400)
+        .forAll(increments())
+        .checkAssert(
+            c -> {
+              double[] s = c.stresses();
+              double[] e = c.voidRatios(s);
+              double[] stresses = Arrays.copyOfRange(s, 1, s.length);
+              double[] voidRatios = Arrays.copyOfRange(e, 1, e.length);
+              CompressionCurve curve = CompressionCurve.of(e[0], s[0], stresses, voidRatios);
+              assertThat(notFinite(curve)).as("%s", c).isEmpty();
+              for (int j = 0; j < curve.size(); j++) {
+                assertThat(
+                        List.of(
+                            curve.stress(j),
+                            curve.voidRatio(j),
+                            curve.axialStrain(j),
+                            curve.startStress(j),
+                            curve.startVoidRatio(j)))
+                    .as("%s, point %d", c, j)
+                    .allMatch(Double::isFinite);
+              }
+              SplittableRandom random = new SplittableRandom(c.seed() ^ 0xC0FFEEL);
+              double pressure =
+                  random.nextBoolean()
+                      ? stresses[random.nextInt(stresses.length)]
+                      : Math.min(
+                          Double.MAX_VALUE,
+                          stresses[0] * Math.pow(10, -1 + 3 * random.nextDouble()));
+              finiteOrClean(c, "increments", () -> Compressibility.increments(curve, pressure));
+              finiteOrClean(c, "virginLine", () -> CompressionIndex.virginLine(curve, pressure));
+              finiteOrClean(c, "branches", () -> CompressionIndex.branches(curve, pressure));
+              int[] fromStress =
+                  java.util.stream.IntStream.range(0, curve.size())
+                      .filter(j -> curve.startStress(j) > 0)
+                      .toArray();
+              if (fromStress.length > 0) {
+                finiteOrClean(
+                    c, "overIncrements", () -> CompressionIndex.overIncrements(curve, fromStress));
+              }
+              double[][] rising = risingPoints(stresses, voidRatios);
+              if (rising[0].length >= 2) {
+                finiteOrClean(
+                    c, "ofPoints", () -> CompressionIndex.ofPoints(e[0], rising[0], rising[1]));
+              }
+              finiteOrClean(c, "Casagrande", () -> CasagrandeMethod.estimate(curve));
+              finiteOrClean(c, "Pacheco Silva", () -> PachecoSilvaMethod.estimate(curve));
+              finiteOrClean(c, "work", () -> WorkMethod.estimate(curve));
+              finiteOrClean(c, "Butterfield", () -> BilinearVolumeMethod.butterfield(curve));
+              finiteOrClean(c, "Onitsuka", () -> BilinearVolumeMethod.onitsuka(curve));
+            });
+  }
+
+  /** The points of strictly rising stress, in order (for a virgin-line fit through points). */
+  private static double[][] risingPoints(double[] stresses, double[] voidRatios) {
+    double[] x = new double[stresses.length];
+    double[] y = new double[stresses.length];
+    int k = 0;
+    for (int j = 0; j < stresses.length; j++) {
+      if (k == 0 || stresses[j] > x[k - 1]) {
+        x[k] = stresses[j];
+        y[k] = voidRatios[j];
+        k++;
+      }
+    }
+    return new double[][] {Arrays.copyOf(x, k), Arrays.copyOf(y, k)};
+  }
+
+  @Test
+  @DisplayName(
+      "Permeability per increment (k = c_v m_v gamma_w) with c_v from 1e-200 to 1e200 m^2/s and"
+          + " the permeability change index on extreme compression curves: finite or a clean"
+          + " IllegalArgumentException")
+  void permeabilityEntryPoints() {
+    qt().withFixedSeed(20261224L)
+        .withExamples(400)
+        .forAll(increments())
+        .checkAssert(
+            c -> {
+              double[] s = c.stresses();
+              double[] e = c.voidRatios(s);
+              CompressionCurve curve =
+                  CompressionCurve.of(
+                      e[0],
+                      s[0],
+                      Arrays.copyOfRange(s, 1, s.length),
+                      Arrays.copyOfRange(e, 1, e.length));
+              List<IncrementCompressibility> all;
+              try {
+                all = Compressibility.increments(curve, curve.stress(0));
+              } catch (IllegalArgumentException ex) {
+                finiteOrClean(c, "increments", () -> Compressibility.increments(curve, 1));
+                return;
+              }
+              double[] cvAll = c.cv();
+              List<IncrementCompressibility> compressing = new ArrayList<>();
+              List<Double> cvList = new ArrayList<>();
+              for (IncrementCompressibility inc : all) {
+                if (inc.mv() > 0) {
+                  compressing.add(inc);
+                  cvList.add(cvAll[inc.index()]);
+                }
+              }
+              double[] cv = cvList.stream().mapToDouble(Double::doubleValue).toArray();
+              for (int j = 0; j < cv.length; j++) {
+                double mv = compressing.get(j).mv();
+                double cvj = cv[j];
+                finiteOrClean(
+                    c, "fromConsolidation", () -> Permeability.fromConsolidation(cvj, mv));
+              }
+              List<IncrementPermeability> permeabilities;
+              try {
+                permeabilities = Permeability.perIncrement(compressing, cv);
+              } catch (IllegalArgumentException ex) {
+                finiteOrClean(c, "perIncrement", () -> Permeability.perIncrement(compressing, cv));
+                return;
+              }
+              assertThat(notFinite(permeabilities)).as("%s", c).isEmpty();
+              finiteOrClean(c, "C_k fit", () -> PermeabilityChangeIndex.fit(permeabilities));
+              double[] voids =
+                  permeabilities.stream().mapToDouble(p -> p.meanVoidRatio()).toArray();
+              double[] ks = permeabilities.stream().mapToDouble(p -> p.permeability()).toArray();
+              finiteOrClean(c, "C_k points", () -> PermeabilityChangeIndex.ofPoints(voids, ks));
+            });
+  }
+
+  @Test
+  @DisplayName(
+      "Compression curve from a specimen's heights and each increment's settlement (1e-200 to"
+          + " 1e200 m) and the secondary compression indices from extreme slopes: finite or a"
+          + " clean IllegalArgumentException")
+  void deformationEntryPoints() {
+    qt().withFixedSeed(20261225L)
+        .withExamples(400)
+        .forAll(increments(), wideExponents(), doubles().between(-12, 400))
+        .checkAssert(
+            (c, log10Height, log10HeightOverSolids) -> {
+              double height = Math.pow(10, log10Height);
+              double solids = Math.pow(10, log10Height - Math.max(1e-12, log10HeightOverSolids));
+              if (!(solids > 0 && solids < height)) {
+                solids = height / 2;
+              }
+              double solidsHeight = solids;
+              finiteOrClean(c, "phases", () -> SpecimenPhases.of(height, solidsHeight));
+              SpecimenPhases phases;
+              try {
+                phases = SpecimenPhases.of(height, solidsHeight);
+              } catch (IllegalArgumentException ex) {
+                return;
+              }
+              double[] s = c.stresses();
+              SplittableRandom random = new SplittableRandom(c.seed() + 99);
+              double room = height - solidsHeight;
+              List<IncrementDeformation> deformations = new ArrayList<>();
+              double settled = 0;
+              for (int j = 1; j < s.length; j++) {
+                settled += (s[j] > s[j - 1] ? 0.3 : -0.05) * random.nextDouble() * (room - settled);
+                double primary = settled * (0.8 + 0.2 * random.nextDouble());
+                deformations.add(IncrementDeformation.of(s[j], settled, primary));
+              }
+              for (DeformationBasis basis : DeformationBasis.values()) {
+                finiteOrClean(
+                    c,
+                    "fromDeformations " + basis,
+                    () -> CompressionCurve.fromDeformations(phases, s[0], deformations, basis));
+              }
+              for (int j = 0; j < deformations.size(); j++) {
+                double settlement = deformations.get(j).endOfIncrementSettlement();
+                finiteOrClean(c, "voidRatio", () -> phases.voidRatio(settlement));
+                finiteOrClean(c, "axialStrain", () -> phases.axialStrain(settlement));
+              }
+              double swelling = -Math.pow(10, -200 + 508 * random.nextDouble());
+              finiteOrClean(c, "voidRatio after swelling", () -> phases.voidRatio(swelling));
+              finiteOrClean(c, "axialStrain of swelling", () -> phases.axialStrain(swelling));
+              double slope =
+                  (random.nextBoolean() ? 1 : -1) * Math.pow(10, -200 + 400 * random.nextDouble());
+              double endVoidRatio = Math.pow(10, -200 + 400 * random.nextDouble());
+              double index =
+                  (random.nextBoolean() ? 1 : -1) * Math.pow(10, -200 + 400 * random.nextDouble());
+              finiteOrClean(
+                  c,
+                  "secondary compression",
+                  () -> SecondaryCompression.of(slope, solidsHeight, endVoidRatio));
+              finiteOrClean(
+                  c,
+                  "secondary compression with C_c",
+                  () -> SecondaryCompression.of(slope, solidsHeight, endVoidRatio, index));
+            });
+  }
+
+  // ---------------------------------------------------------------------------------------------
+  // The walk over a result's accessors.
+
+  /** A stand-in result for the walk's own check. */
+  record Probe(double value, List<Optional<Probe>> nested, OptionalDouble extra) {
+
+    /** A derived value, not a component, that the walk must also reach. */
+    public double twice() {
+      return value * 2;
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "The walk finds a NaN or an infinity at any depth (record, derived accessor, list,"
+          + " optional, OptionalDouble) and passes a finite result: the properties above can fail")
+  void walkFindsWhatItLooksFor() {
+    Probe leaf = new Probe(1, List.of(), OptionalDouble.of(3));
+    assertThat(notFinite(new Probe(2, List.of(Optional.of(leaf)), OptionalDouble.empty())))
+        .isEmpty();
+    Probe bad = new Probe(1, List.of(), OptionalDouble.of(Double.NaN));
+    assertThat(notFinite(new Probe(2, List.of(Optional.of(bad)), OptionalDouble.empty())))
+        .containsExactly("result.nested()[0].get.extra().get = NaN");
+    assertThat(notFinite(new Probe(Double.MAX_VALUE, List.of(), OptionalDouble.empty())))
+        .containsExactly("result.twice() = Infinity");
+  }
+
+  /**
+   * Every number reachable from a value through its public no-argument accessors (record components
+   * and derived values), lists, optionals and arrays, that is NaN or infinite, or a null, or an
+   * accessor that throws; also calls toString.
+   *
+   * @return the paths of the offending values; empty when all is well
+   */
+  static List<String> notFinite(Object value) {
+    List<String> found = new ArrayList<>();
+    walk(value, "result", found, new IdentityHashMap<>(), 0);
+    return found;
+  }
+
+  private static void walk(
+      Object value, String path, List<String> found, Map<Object, Boolean> seen, int depth) {
+    if (value == null) {
+      found.add(path + " is null");
+    } else if (value instanceof Double d) {
+      if (!Double.isFinite(d)) {
+        found.add(path + " = " + d);
+      }
+    } else if (value instanceof Float f) {
+      if (!Float.isFinite(f)) {
+        found.add(path + " = " + f);
+      }
+    } else if (value instanceof Number
+        || value instanceof Boolean
+        || value instanceof Character
+        || value instanceof String
+        || value instanceof Enum<?>
+        || value instanceof OptionalInt
+        || value instanceof OptionalLong) {
+      return;
+    } else if (value instanceof OptionalDouble o) {
+      if (o.isPresent()) {
+        walk(o.getAsDouble(), path + ".get", found, seen, depth);
+      }
+    } else if (value instanceof Optional<?> o) {
+      if (o.isPresent()) {
+        walk(o.get(), path + ".get", found, seen, depth);
+      }
+    } else if (value instanceof double[] a) {
+      for (int i = 0; i < a.length; i++) {
+        walk(a[i], path + "[" + i + "]", found, seen, depth);
+      }
+    } else if (value instanceof Object[] a) {
+      for (int i = 0; i < a.length; i++) {
+        walk(a[i], path + "[" + i + "]", found, seen, depth);
+      }
+    } else if (value.getClass().isArray()) {
+      return; // int[], boolean[], ...: no NaN possible
+    } else if (value instanceof Collection<?> list) {
+      int i = 0;
+      for (Object element : list) {
+        walk(element, path + "[" + i++ + "]", found, seen, depth);
+      }
+    } else if (value.getClass().getName().startsWith("org.oedometry.")) {
+      if (seen.put(value, Boolean.TRUE) != null || depth > 12) {
+        return;
+      }
+      try {
+        String text = value.toString();
+        if (text == null || text.isEmpty()) {
+          found.add(path + ".toString() is empty");
+        }
+      } catch (RuntimeException e) {
+        found.add(path + ".toString() threw " + e);
+      }
+      for (Method accessor : accessors(value.getClass())) {
+        Object next;
+        try {
+          next = accessor.invoke(value);
+        } catch (InvocationTargetException e) {
+          found.add(path + "." + accessor.getName() + "() threw " + e.getCause());
+          continue;
+        } catch (IllegalAccessException e) {
+          found.add(path + "." + accessor.getName() + "() is not accessible: " + e);
+          continue;
+        }
+        walk(next, path + "." + accessor.getName() + "()", found, seen, depth + 1);
+      }
+    } else {
+      found.add(path + " has a type the walk does not know: " + value.getClass().getName());
+    }
+  }
+
+  /** Public, non-static, no-argument, value-returning methods of our own types, sorted by name. */
+  private static List<Method> accessors(Class<?> type) {
+    List<Method> out = new ArrayList<>();
+    for (Method m : type.getMethods()) {
+      if (m.getParameterCount() == 0
+          && !Modifier.isStatic(m.getModifiers())
+          && m.getReturnType() != void.class
+          && !m.isSynthetic()
+          && !m.isBridge()
+          && m.getDeclaringClass().getName().startsWith("org.oedometry.")
+          && !m.getName().equals("toString")
+          && !m.getName().equals("hashCode")) {
+        out.add(m);
+      }
+    }
+    out.sort(Comparator.comparing(Method::getName));
+    return out;
+  }
+}
