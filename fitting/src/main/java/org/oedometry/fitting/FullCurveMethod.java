@@ -28,6 +28,9 @@ import org.oedometry.theory.CurveParameters;
  *       FitWarning.Kind#ZERO_READING_IGNORED}, as in the constructions); it may hold the
  *       instantaneous (false) deformation, which d<sub>i</sub> absorbs. A swelling increment (final
  *       reading below the first) is fitted on the magnitude and reported in the input's sign.
+ *       Settlements whose movement lies outside 10<sup>-18</sup> m to 2 x 10<sup>6</sup> m (far
+ *       outside any specimen, but what a unit mistake can give) are fitted divided by a power of 2,
+ *       exactly, and the results scaled back.
  *   <li>Weights ({@link FullCurveOptions.ReadingWeights}): by default each reading weighs the span
  *       of log t it represents, normalised to a mean of 1.
  *   <li>Grouping (data loggers): above 400 readings the search of the next step runs on 100 equal
@@ -203,12 +206,16 @@ public final class FullCurveMethod {
               + " m): there is no consolidation to fit");
     }
     final double sign = y[n - 1] >= y[0] ? 1.0 : -1.0;
+    // Settlements of extreme magnitude are fitted scaled by a power of 2 (exactly); ordinary ones
+    // are not scaled at all. toInput takes fitted settlements back to the input's sign and unit.
+    final int scale = settlementScale(lowest, highest);
+    final double toInput = Math.scalb(sign, scale);
     // Mean of the fitted (magnitude) settlements, for R^2.
-    final double mean = sign * sum / n;
-    if (sign < 0) {
+    final double mean = Math.scalb(sign * sum / n, -scale);
+    if (toInput != 1.0) {
       // Fitted on the magnitude (the array is this method's own copy).
       for (int i = 0; i < n; i++) {
-        y[i] = -y[i];
+        y[i] = Math.scalb(sign * y[i], -scale);
       }
     }
     final double[] w = weights(t, options.weights());
@@ -293,7 +300,7 @@ public final class FullCurveMethod {
     }
     // The log-time and root-time constructions, where they succeed, give further starts.
     for (double constructionCv :
-        constructionCvs(groups.asCurve(curve, first, sign), drainagePathMetres)) {
+        constructionCvs(groups.asCurve(curve, first, toInput), drainagePathMetres)) {
       double[] linear =
           linearFit(
               model,
@@ -391,6 +398,10 @@ public final class FullCurveMethod {
     for (int j = 0; j < parameterCount; j++) {
       errors[j] = Math.sqrt(Math.max(0.0, covariance[j][j] * widening));
     }
+    // d_i, d_p and s in metres of the input (ln c_v has no unit).
+    errors[0] = Math.scalb(errors[0], scale);
+    errors[1] = Math.scalb(errors[1], scale);
+    errors[3] = Math.scalb(errors[3], scale);
     double quantile = studentQuantile(0.5 + options.confidenceLevel() / 2, n - parameterCount);
     double halfWidth = quantile * errors[2];
     double cvLow = Math.exp(logCv - halfWidth);
@@ -476,17 +487,18 @@ public final class FullCurveMethod {
     double logLast = Math.log10(lastTime);
     for (int k = 0; k < CURVE_POINTS; k++) {
       double logTime = logFirst + (logLast - logFirst) * k / (CURVE_POINTS - 1);
-      plotted.add(new PlotPoint(logTime, sign * fittedCurve.settlement(Math.pow(10, logTime))));
+      plotted.add(new PlotPoint(logTime, toInput * fittedCurve.settlement(Math.pow(10, logTime))));
     }
     // The residuals array is this method's own copy: the list takes it over, negated in place for a
-    // swelling increment.
-    if (sign < 0) {
+    // swelling increment (and scaled back for settlements of extreme magnitude).
+    if (toInput != 1.0) {
       for (int i = 0; i < n; i++) {
-        residuals[i] = -residuals[i];
+        residuals[i] = toInput * residuals[i];
       }
     }
     List<Double> residualList = FrozenDoubles.owning(residuals);
-    CurveParameters reported = new CurveParameters(sign * p[0], sign * p[1], cv, sign * secondary);
+    CurveParameters reported =
+        new CurveParameters(toInput * p[0], toInput * p[1], cv, toInput * secondary);
     return new FullCurveResult(
         cv,
         cvLow,
@@ -498,7 +510,7 @@ public final class FullCurveMethod {
         reported,
         List.of(errors[0], errors[1], errors[2], errors[3]),
         residualList,
-        Math.sqrt(sumSquares / n),
+        Math.scalb(Math.sqrt(sumSquares / n), scale),
         rSquared,
         iterations,
         evaluations,
@@ -508,6 +520,30 @@ public final class FullCurveMethod {
         endFactor,
         plotted,
         warnings);
+  }
+
+  /** Exponent of 2 of the movement below which (and above which) settlements are scaled. */
+  private static final int LEAST_ORDINARY_EXPONENT = -60;
+
+  private static final int GREATEST_ORDINARY_EXPONENT = 20;
+
+  /** Exponent of 2 of the movement of scaled settlements (about a millimetre). */
+  private static final int SCALED_EXPONENT = -10;
+
+  /**
+   * The power of 2 by which the fit divides settlements: 0 for a movement (highest - lowest
+   * reading) from 2<sup>-60</sup> m (10<sup>-18</sup>) to 2<sup>21</sup> m, else the one that
+   * brings the movement to about 2<sup>-10</sup> m, so that sums of squared residuals neither
+   * underflow nor overflow. Dividing by a power of 2 is exact, and the fit's tolerances are
+   * relative, so the result scales back with the settlements.
+   */
+  static int settlementScale(double lowest, double highest) {
+    // Half the movement: no overflow between readings of opposite sign near the double range.
+    int exponent = Math.getExponent(0.5 * highest - 0.5 * lowest) + 1;
+    if (exponent >= LEAST_ORDINARY_EXPONENT && exponent <= GREATEST_ORDINARY_EXPONENT) {
+      return 0;
+    }
+    return exponent - SCALED_EXPONENT;
   }
 
   /**

@@ -242,15 +242,17 @@ final class ReadingGroups {
   }
 
   /**
-   * The bin means as a settlement curve in the input's sign (with its reading at t = 0, if it had
-   * one), for the constructions that give start values; the original curve if not grouped.
+   * The bin means as a settlement curve in the input's sign and unit (with its reading at t = 0, if
+   * it had one), for the constructions that give start values; the original curve if not grouped.
    *
    * @param original the increment's readings
    * @param first 1 if the original starts with a reading at t = 0, else 0
-   * @param sign +1, or -1 for a swelling increment fitted on the magnitude
+   * @param toInput the factor that takes the fitted settlements back to the input's: +1, or -1 for
+   *     a swelling increment fitted on the magnitude, times the power of 2 by which settlements of
+   *     extreme magnitude were scaled
    * @return the curve
    */
-  SettlementCurve asCurve(SettlementCurve original, int first, double sign) {
+  SettlementCurve asCurve(SettlementCurve original, int first, double toInput) {
     if (!grouped) {
       return original;
     }
@@ -262,7 +264,7 @@ final class ReadingGroups {
     }
     for (int k = 0; k < meanTimes.length; k++) {
       curveTimes[first + k] = meanTimes[k];
-      curveSettlements[first + k] = sign * meanSettlements[k];
+      curveSettlements[first + k] = toInput * meanSettlements[k];
     }
     return SettlementCurve.of(curveTimes, curveSettlements);
   }

@@ -1,7 +1,6 @@
 package org.oedometry.fitting;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
 import static org.quicktheories.generators.SourceDSL.integers;
@@ -365,20 +364,33 @@ class ExtremeInputsProperties {
 
   @Test
   @DisplayName(
-      "Regression: FullCurveMethod on 25 readings 1 s apart, all 0 but the last (1e-155 m), H_dr"
-          + " 0.05 m: a FitException, no longer an IllegalArgumentException 'initial settlement"
-          + " (NaN m)' from the theory module thrown inside Commons Math's optimiser")
+      "Regression: FullCurveMethod on 25 readings 1 s apart, all 0 but the last (2^-515 m, about"
+          + " 1.5e-155 m), H_dr 0.05 m: the outcome of the same curve with a 2^-10 m (about 1 mm)"
+          + " step, bit for bit (the fit divides settlements of extreme magnitude by a power of"
+          + " 2), no longer an IllegalArgumentException 'initial settlement (NaN m)'"
+          + " from the theory module thrown inside Commons Math's optimiser")
   void fullCurveTinyStepInTheLastReading() {
     double[] t = new double[25];
-    double[] d = new double[25];
+    double[] tiny = new double[25];
+    double[] millimetre = new double[25];
     for (int i = 0; i < t.length; i++) {
       t[i] = i;
     }
-    d[24] = 1e-155;
-    SettlementCurve curve = SettlementCurve.of(t, d);
-    assertThatThrownBy(() -> FullCurveMethod.fit(curve, 0.05))
-        .isInstanceOf(FitException.class)
-        .hasMessageNotContaining("initial settlement");
+    tiny[24] = 0x1p-515;
+    millimetre[24] = 0x1p-10;
+    String tinyOutcome = outcome(() -> FullCurveMethod.fit(SettlementCurve.of(t, tiny), 0.05).cv());
+    String millimetreOutcome =
+        outcome(() -> FullCurveMethod.fit(SettlementCurve.of(t, millimetre), 0.05).cv());
+    assertThat(tinyOutcome).isEqualTo(millimetreOutcome).doesNotContain("initial settlement");
+  }
+
+  /** The c_v to the last bit, or the exception's class and message. */
+  private static String outcome(java.util.function.DoubleSupplier fit) {
+    try {
+      return Double.toString(fit.getAsDouble());
+    } catch (RuntimeException e) {
+      return e.getClass().getSimpleName() + ": " + e.getMessage();
+    }
   }
 
   /** A stand-in result for the walk's own check. */

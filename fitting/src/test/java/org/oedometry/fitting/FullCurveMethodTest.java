@@ -89,6 +89,41 @@ class FullCurveMethodTest {
   }
 
   @Test
+  @DisplayName(
+      "Settlements of extreme magnitude (1e-150 to 1e150 m, a unit mistake) give the c_v of the same"
+          + " curve in metres, with d0, d100, s, residuals and their errors scaled: the fit divides"
+          + " them by a power of 2 [scaling the data scales a least-squares fit: invariance]")
+  void extremeSettlementMagnitudes() {
+    CurveParameters truth = CurveParameters.of(0.020e-3, 0.600e-3, 2 / YEAR, 0.030e-3);
+    SettlementCurve metres = curve(labSchedule(), truth, 1e-6, new SplittableRandom(9));
+    FullCurveResult base = FullCurveMethod.fit(metres, DRAINAGE_PATH);
+    for (double factor : new double[] {0x1p-500, 0x1p500, 1e-150, 1e150, -1e-150}) {
+      double[] d = metres.settlementMetres();
+      for (int i = 0; i < d.length; i++) {
+        d[i] *= factor;
+      }
+      FullCurveResult r =
+          FullCurveMethod.fit(SettlementCurve.of(metres.elapsedSeconds(), d), DRAINAGE_PATH);
+      // A power of 2 scales every number exactly; a power of 10 rounds the readings once.
+      boolean powerOfTwo = factor == Math.scalb(Math.signum(factor), Math.getExponent(factor));
+      double tolerance = powerOfTwo ? 1e-12 : 1e-6;
+      assertThat(r.cv() / base.cv()).as("c_v, factor %s", factor).isCloseTo(1, within(tolerance));
+      assertThat(r.cvHigh() / base.cvHigh()).isCloseTo(1, within(tolerance));
+      assertThat(r.d0() / (factor * base.d0())).isCloseTo(1, within(1e-6));
+      assertThat(r.d100() / (factor * base.d100())).isCloseTo(1, within(1e-6));
+      assertThat(r.secondarySlope() / (factor * base.secondarySlope())).isCloseTo(1, within(1e-6));
+      assertThat(r.rootMeanSquareResidual() / (Math.abs(factor) * base.rootMeanSquareResidual()))
+          .isCloseTo(1, within(1e-6));
+      assertThat(r.standardErrors().get(1) / (Math.abs(factor) * base.standardErrors().get(1)))
+          .isCloseTo(1, within(1e-6));
+      assertThat(r.residuals().get(5) / (factor * base.residuals().get(5)))
+          .isCloseTo(1, within(1e-4));
+      assertThat(r.fittedCurve().get(50).y() / (factor * base.fittedCurve().get(50).y()))
+          .isCloseTo(1, within(1e-6));
+    }
+  }
+
+  @Test
   @DisplayName("Noise-free lab schedule: c_v within 0.1 %, d_i within 0.1 % of d_p, s within 1 %")
   void recoversExactParameters() {
     for (double cvPerYear : new double[] {0.5, 2, 8, 30}) {
