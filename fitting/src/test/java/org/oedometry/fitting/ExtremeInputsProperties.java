@@ -1,26 +1,15 @@
 package org.oedometry.fitting;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.oedometry.core.FiniteResults.notFinite;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
 import static org.quicktheories.generators.SourceDSL.integers;
 import static org.quicktheories.generators.SourceDSL.longs;
 
-import java.lang.reflect.InvocationTargetException;
-import java.lang.reflect.Method;
-import java.lang.reflect.Modifier;
-import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collection;
-import java.util.Comparator;
-import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
-import java.util.Optional;
-import java.util.OptionalDouble;
-import java.util.OptionalInt;
-import java.util.OptionalLong;
 import java.util.SplittableRandom;
 import java.util.function.BiFunction;
 import org.junit.jupiter.api.DisplayName;
@@ -391,151 +380,5 @@ class ExtremeInputsProperties {
     } catch (RuntimeException e) {
       return e.getClass().getSimpleName() + ": " + e.getMessage();
     }
-  }
-
-  /** A stand-in result for the walk's own check. */
-  record Probe(double value, List<Optional<PlotPoint>> points, OptionalDouble extra) {
-
-    /** A derived value, not a component, that the walk must also reach. */
-    public double twice() {
-      return value * 2;
-    }
-  }
-
-  /** A stand-in result whose derived accessor throws. */
-  record BrokenProbe(double value) {
-
-    /** Always throws (a point with a NaN ordinate). */
-    public PlotPoint point() {
-      return new PlotPoint(value, Double.NaN);
-    }
-  }
-
-  @Test
-  @DisplayName(
-      "The walk finds a NaN or an infinity at any depth (record, list, optional, OptionalDouble)"
-          + " and passes a finite result: the property above can fail")
-  void walkFindsWhatItLooksFor() {
-    Probe clean = new Probe(1, List.of(Optional.of(new PlotPoint(1, 2))), OptionalDouble.of(3));
-    assertThat(notFinite(clean)).isEmpty();
-    Probe nested = new Probe(1, List.of(Optional.empty()), OptionalDouble.of(Double.NaN));
-    assertThat(notFinite(nested)).containsExactly("result.extra().get = NaN");
-    Probe top = new Probe(Double.NEGATIVE_INFINITY, List.of(), OptionalDouble.empty());
-    assertThat(notFinite(top))
-        .containsExactly("result.twice() = -Infinity", "result.value() = -Infinity");
-    Probe derived = new Probe(Double.MAX_VALUE, List.of(), OptionalDouble.empty());
-    assertThat(notFinite(derived)).containsExactly("result.twice() = Infinity");
-    assertThat(notFinite(new BrokenProbe(1)))
-        .singleElement()
-        .asString()
-        .startsWith("result.point() threw java.lang.IllegalArgumentException");
-  }
-
-  // ---------------------------------------------------------------------------------------------
-  // The walk over a result's accessors.
-
-  /**
-   * Every number reachable from a value through its public no-argument accessors (record components
-   * and derived values such as {@link StraightLine#start()}), lists, optionals and arrays, that is
-   * NaN or infinite, or a null, or an accessor that throws; also calls toString.
-   *
-   * @return the paths of the offending values; empty when all is well
-   */
-  static List<String> notFinite(Object value) {
-    List<String> found = new ArrayList<>();
-    walk(value, "result", found, new IdentityHashMap<>(), 0);
-    return found;
-  }
-
-  private static void walk(
-      Object value, String path, List<String> found, Map<Object, Boolean> seen, int depth) {
-    if (value == null) {
-      found.add(path + " is null");
-    } else if (value instanceof Double d) {
-      if (!Double.isFinite(d)) {
-        found.add(path + " = " + d);
-      }
-    } else if (value instanceof Float f) {
-      if (!Float.isFinite(f)) {
-        found.add(path + " = " + f);
-      }
-    } else if (value instanceof Number
-        || value instanceof Boolean
-        || value instanceof Character
-        || value instanceof String
-        || value instanceof Enum<?>
-        || value instanceof OptionalInt
-        || value instanceof OptionalLong) {
-      return;
-    } else if (value instanceof OptionalDouble o) {
-      if (o.isPresent()) {
-        walk(o.getAsDouble(), path + ".get", found, seen, depth);
-      }
-    } else if (value instanceof Optional<?> o) {
-      if (o.isPresent()) {
-        walk(o.get(), path + ".get", found, seen, depth);
-      }
-    } else if (value instanceof double[] a) {
-      for (int i = 0; i < a.length; i++) {
-        walk(a[i], path + "[" + i + "]", found, seen, depth);
-      }
-    } else if (value instanceof Object[] a) {
-      for (int i = 0; i < a.length; i++) {
-        walk(a[i], path + "[" + i + "]", found, seen, depth);
-      }
-    } else if (value.getClass().isArray()) {
-      return; // int[], boolean[], ...: no NaN possible
-    } else if (value instanceof Collection<?> list) {
-      int i = 0;
-      for (Object element : list) {
-        walk(element, path + "[" + i++ + "]", found, seen, depth);
-      }
-    } else if (value.getClass().getName().startsWith("org.oedometry.")) {
-      if (seen.put(value, Boolean.TRUE) != null || depth > 12) {
-        return;
-      }
-      try {
-        String text = value.toString();
-        if (text == null || text.isEmpty()) {
-          found.add(path + ".toString() is empty");
-        }
-      } catch (RuntimeException e) {
-        found.add(path + ".toString() threw " + e);
-      }
-      for (Method accessor : accessors(value.getClass())) {
-        Object next;
-        try {
-          next = accessor.invoke(value);
-        } catch (InvocationTargetException e) {
-          found.add(path + "." + accessor.getName() + "() threw " + e.getCause());
-          continue;
-        } catch (IllegalAccessException e) {
-          found.add(path + "." + accessor.getName() + "() is not accessible: " + e);
-          continue;
-        }
-        walk(next, path + "." + accessor.getName() + "()", found, seen, depth + 1);
-      }
-    } else {
-      found.add(path + " has a type the walk does not know: " + value.getClass().getName());
-    }
-  }
-
-  /** Public, non-static, no-argument, value-returning methods of our own types, sorted by name. */
-  private static List<Method> accessors(Class<?> type) {
-    List<Method> out = new ArrayList<>();
-    for (Method m : type.getMethods()) {
-      if (m.getParameterCount() == 0
-          && !Modifier.isStatic(m.getModifiers())
-          && m.getReturnType() != void.class
-          && !m.isSynthetic()
-          && !m.isBridge()
-          && m.getDeclaringClass().getName().startsWith("org.oedometry.")
-          && !m.getName().equals("toString")
-          && !m.getName().equals("hashCode")) {
-        out.add(m);
-      }
-    }
-    out.sort(Comparator.comparing(Method::getName));
-    return out;
   }
 }

@@ -54,4 +54,17 @@ final class Checks {
     }
     return value;
   }
+
+  /**
+   * The value if it is finite; otherwise an IllegalArgumentException whose message is the formatted
+   * description (naming the quantity and the numbers it came from) followed by "is beyond the
+   * double range". For derived values whose inputs are finite but whose quotient or sum overflows.
+   */
+  static double representable(double value, String description, Object... numbers) {
+    if (!Double.isFinite(value)) {
+      throw new IllegalArgumentException(
+          String.format(Locale.ROOT, description, numbers) + " is beyond the double range");
+    }
+    return value;
+  }
 }

@@ -2,7 +2,6 @@ package org.oedometry.core.compressibility;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.OptionalDouble;
 
 /**
@@ -92,20 +91,15 @@ public final class Compressibility {
    * stresses of very different magnitudes).
    */
   private static double representable(int j, String name, double value, CompressionCurve curve) {
-    if (!Double.isFinite(value)) {
-      throw new IllegalArgumentException(
-          String.format(
-              Locale.ROOT,
-              "increment at index %d: the %s from void ratio %s to %s over stress %s Pa to %s Pa"
-                  + " is beyond the double range",
-              j,
-              name,
-              curve.startVoidRatio(j),
-              curve.voidRatio(j),
-              curve.startStress(j),
-              curve.stress(j)));
-    }
-    return value;
+    return Checks.representable(
+        value,
+        "increment at index %d: the %s from void ratio %s to %s over stress %s Pa to %s Pa",
+        j,
+        name,
+        curve.startVoidRatio(j),
+        curve.voidRatio(j),
+        curve.startStress(j),
+        curve.stress(j));
   }
 
   /**

@@ -84,16 +84,13 @@ public final class SecondaryCompression {
     Checks.finite("settlement per log cycle", settlementPerLogCycle, " m");
     Checks.positive("height of solids", solidsHeight, " m");
     Checks.positive("end-of-primary void ratio", endOfPrimaryVoidRatio, "");
-    double cAlpha = settlementPerLogCycle / solidsHeight;
-    if (!Double.isFinite(cAlpha)) {
-      throw new IllegalArgumentException(
-          String.format(
-              Locale.ROOT,
-              "the secondary compression index from %s m per log cycle over a height of solids of"
-                  + " %s m is beyond the double range",
-              settlementPerLogCycle,
-              solidsHeight));
-    }
+    double cAlpha =
+        Checks.representable(
+            settlementPerLogCycle / solidsHeight,
+            "the secondary compression index from %s m per log cycle over a height of solids of"
+                + " %s m",
+            settlementPerLogCycle,
+            solidsHeight);
     double cAlphaEps = cAlpha / (1.0 + endOfPrimaryVoidRatio);
     List<CompressibilityWarning> warnings = new ArrayList<>();
     Derived<Double> ratio;

@@ -54,15 +54,11 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
               solidsHeight,
               initialHeight));
     }
-    if (!Double.isFinite(initialHeight / solidsHeight)) {
-      throw new IllegalArgumentException(
-          String.format(
-              Locale.ROOT,
-              "initial height (%s m) over height of solids (%s m) is beyond the double range: the"
-                  + " initial void ratio cannot be represented",
-              initialHeight,
-              solidsHeight));
-    }
+    Checks.representable(
+        initialHeight / solidsHeight,
+        "initial height (%s m) over height of solids (%s m), the initial void ratio plus 1,",
+        initialHeight,
+        solidsHeight);
   }
 
   /**
@@ -190,18 +186,12 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
               settlement,
               initialHeight - solidsHeight));
     }
-    double voidRatio = (initialHeight - settlement) / solidsHeight - 1.0;
-    if (!Double.isFinite(voidRatio)) {
-      throw new IllegalArgumentException(
-          String.format(
-              Locale.ROOT,
-              "void ratio after a settlement of %s m (initial height %s m, height of solids %s m)"
-                  + " is beyond the double range",
-              settlement,
-              initialHeight,
-              solidsHeight));
-    }
-    return voidRatio;
+    return Checks.representable(
+        (initialHeight - settlement) / solidsHeight - 1.0,
+        "void ratio after a settlement of %s m (initial height %s m, height of solids %s m)",
+        settlement,
+        initialHeight,
+        solidsHeight);
   }
 
   /**
@@ -214,16 +204,10 @@ public record SpecimenPhases(double initialHeight, double solidsHeight) {
    */
   public double axialStrain(double settlement) {
     Checks.finite("settlement", settlement, " m");
-    double strain = settlement / initialHeight;
-    if (!Double.isFinite(strain)) {
-      throw new IllegalArgumentException(
-          String.format(
-              Locale.ROOT,
-              "axial strain of a settlement of %s m over an initial height of %s m is beyond the"
-                  + " double range",
-              settlement,
-              initialHeight));
-    }
-    return strain;
+    return Checks.representable(
+        settlement / initialHeight,
+        "axial strain of a settlement of %s m over an initial height of %s m",
+        settlement,
+        initialHeight);
   }
 }

@@ -99,8 +99,8 @@ class SpecimenPhasesTest {
     assertThatThrownBy(() -> SpecimenPhases.of(1e300, 1e-10))
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage(
-            "initial height (1.0E300 m) over height of solids (1.0E-10 m) is beyond the double"
-                + " range: the initial void ratio cannot be represented");
+            "initial height (1.0E300 m) over height of solids (1.0E-10 m), the initial void ratio"
+                + " plus 1, is beyond the double range");
     assertThatThrownBy(() -> SpecimenPhases.of(0.02, 0.01).voidRatio(-1e307))
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage(
