@@ -32,6 +32,20 @@ public record ConstructionLine(String label, double x1, double y1, double x2, do
   }
 
   static ConstructionLine along(String label, LineFit line, double fromX, double toX) {
-    return new ConstructionLine(label, fromX, line.valueAt(fromX), toX, line.valueAt(toX));
+    return new ConstructionLine(
+        label, fromX, ordinate(label, line, fromX), toX, ordinate(label, line, toX));
+  }
+
+  /**
+   * The line's ordinate at x, or an IllegalArgumentException naming the line where it overflows.
+   */
+  private static double ordinate(String label, LineFit line, double x) {
+    return Checks.representable(
+        line.valueAt(x),
+        "the %s (slope %s, intercept %s) at abscissa %s",
+        label,
+        line.slope(),
+        line.intercept(),
+        x);
   }
 }
