@@ -67,4 +67,13 @@ final class Checks {
     }
     return value;
   }
+
+  /**
+   * (a + b) / 2 without overflow: the halved sum where the sum is finite (the same bits as before
+   * this helper), else the sum of the halves (finite values near the top of the double range).
+   */
+  static double mean(double a, double b) {
+    double sum = a + b;
+    return Double.isFinite(sum) ? 0.5 * sum : 0.5 * a + 0.5 * b;
+  }
 }

@@ -52,7 +52,6 @@ public final class Compressibility {
             OptionalDouble.of(
                 representable(j, "compression slope", -(e2 - e1) / log10Ratio(s1, s2), curve));
       }
-      double sum = s1 + s2;
       out.add(
           new IncrementCompressibility(
               j,
@@ -64,7 +63,7 @@ public final class Compressibility {
               av,
               mv,
               logMean,
-              Double.isFinite(sum) ? 0.5 * sum : 0.5 * s1 + 0.5 * s2,
+              Checks.mean(s1, s2),
               slope,
               classes.get(j)));
     }

@@ -118,7 +118,6 @@ public record IncrementCompressibility(
    * @return dimensionless
    */
   public double meanVoidRatio() {
-    double sum = startVoidRatio + endVoidRatio;
-    return Double.isFinite(sum) ? 0.5 * sum : 0.5 * startVoidRatio + 0.5 * endVoidRatio;
+    return Checks.mean(startVoidRatio, endVoidRatio);
   }
 }

@@ -79,9 +79,7 @@ public final class WorkMethod {
     for (int i = 0; i < n; i++) {
       double stress = env.stress[i + offset];
       double strain = (e0 - env.voidRatio[i + offset]) / (1.0 + e0);
-      double sum = previousStress + stress;
-      double meanStress = Double.isFinite(sum) ? 0.5 * sum : 0.5 * previousStress + 0.5 * stress;
-      work += meanStress * (strain - previousStrain);
+      work += Checks.mean(previousStress, stress) * (strain - previousStrain);
       if (!Double.isFinite(work)) {
         return PreconsolidationEstimate.absent(
             method,
