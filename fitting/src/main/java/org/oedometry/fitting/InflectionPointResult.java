@@ -24,6 +24,9 @@ import org.oedometry.fitting.internal.Checks;
  * @param d100 end of primary consolidation implied by the slope, d<sub>0</sub> + slope / 0.686845,
  *     m
  * @param windowHalfWidth half-width of the final local window, log<sub>10</sub> cycles
+ * @param windowCorrection how far the final window's fit placed the inflection from where the same
+ *     fit places it on Terzaghi's exact curve, log<sub>10</sub> cycles: subtracted from the fit's
+ *     inflection to give {@link #inflectionTime()} (0 when the inflection came from a spline)
  * @param inflectionPoint the inflection in plot coordinates
  * @param tangentLine the tangent at the inflection, from its crossing of d<sub>0</sub> to its
  *     crossing of d<sub>100</sub> (two points)
@@ -39,6 +42,7 @@ public record InflectionPointResult(
     double d0,
     double d100,
     double windowHalfWidth,
+    double windowCorrection,
     PlotPoint inflectionPoint,
     List<PlotPoint> tangentLine,
     List<PlotPoint> readingsUsed,
@@ -56,6 +60,7 @@ public record InflectionPointResult(
    * @param d0 m, finite
    * @param d100 m, finite
    * @param windowHalfWidth log<sub>10</sub> cycles, finite
+   * @param windowCorrection log<sub>10</sub> cycles, finite
    * @param inflectionPoint not null
    * @param tangentLine two points
    * @param readingsUsed the readings of the window
@@ -72,6 +77,7 @@ public record InflectionPointResult(
     Checks.requireFinite("d0", d0, "m");
     Checks.requireFinite("d100", d100, "m");
     Checks.requireFinite("window half-width", windowHalfWidth, "log10 cycles");
+    Checks.requireFinite("window correction", windowCorrection, "log10 cycles");
     Checks.requireDrainagePath(drainagePath);
     java.util.Objects.requireNonNull(inflectionPoint, "inflectionPoint");
     tangentLine = List.copyOf(tangentLine);

@@ -62,6 +62,64 @@ final class SmallFits {
   }
 
   /**
+   * Variance of one coefficient of a least-squares polynomial ({@link #polynomial}): s<sup>2</sup>
+   * [(V<sup>T</sup>V)<sup>-1</sup>]<sub>kk</sub>, with V the Vandermonde matrix of the points (in
+   * u) and s<sup>2</sup> = RSS / (n - m) the residual variance, m = the number of coefficients.
+   * Formed on u / scale as {@link #polynomial} is, and scaled back.
+   *
+   * @param u the abscissae
+   * @param y the ordinates
+   * @param coefficients the fitted coefficients in u, from {@link #polynomial}
+   * @param index k, in [0, coefficients.length)
+   * @return the variance, or positive infinity if n &le; m or the system is singular
+   */
+  static double coefficientVariance(double[] u, double[] y, double[] coefficients, int index) {
+    int m = coefficients.length;
+    int n = u.length;
+    if (n <= m) {
+      return Double.POSITIVE_INFINITY;
+    }
+    double scale = 0;
+    for (double value : u) {
+      scale = Math.max(scale, Math.abs(value));
+    }
+    if (!(scale > 0)) {
+      scale = 1;
+    }
+    double squares = 0;
+    double[][] a = new double[m][m + 1];
+    double[] powers = new double[2 * m - 1];
+    for (int i = 0; i < n; i++) {
+      double fitted = 0;
+      for (int k = m - 1; k >= 0; k--) {
+        fitted = fitted * u[i] + coefficients[k];
+      }
+      double residual = y[i] - fitted;
+      squares += residual * residual;
+      double v = u[i] / scale;
+      double p = 1;
+      for (int k = 0; k < powers.length; k++) {
+        powers[k] = p;
+        p *= v;
+      }
+      for (int r = 0; r < m; r++) {
+        for (int c = 0; c < m; c++) {
+          a[r][c] += powers[r + c];
+        }
+      }
+    }
+    a[index][m] = 1;
+    double[] column = solve(a);
+    if (column == null) {
+      return Double.POSITIVE_INFINITY;
+    }
+    // [(V^T V)^-1]_kk in u = the same in u / scale divided by scale^(2k).
+    double inverse = column[index] / Math.pow(scale, 2.0 * index);
+    double variance = squares / (n - m) * inverse;
+    return Double.isFinite(variance) && variance >= 0 ? variance : Double.POSITIVE_INFINITY;
+  }
+
+  /**
    * Solves a small augmented system [A | b] in place by Gaussian elimination with partial pivoting.
    *
    * @return the solution, or null if the system is singular

@@ -27,6 +27,43 @@ class SmallFitsTest {
 
   @Test
   @DisplayName(
+      "Coefficient variance of a quintic fit: the same as Commons Math OLSMultipleLinearRegression"
+          + " (estimateRegressionParametersVariance times the error variance) to 1e-8")
+  void coefficientVarianceMatchesCommonsMath() {
+    java.util.SplittableRandom random = new java.util.SplittableRandom(5);
+    int n = 40;
+    double[] u = new double[n];
+    double[] y = new double[n];
+    double[][] design = new double[n][5];
+    for (int i = 0; i < n; i++) {
+      u[i] = -1.1 + 2.3 * i / (n - 1);
+      y[i] = Math.tanh(2 * u[i] - 0.3) + 0.01 * random.nextGaussian();
+      for (int k = 1; k <= 5; k++) {
+        design[i][k - 1] = Math.pow(u[i], k);
+      }
+    }
+    double[] c = SmallFits.polynomial(u, y, 5);
+    var reference = new org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression();
+    reference.newSampleData(y, design);
+    double[][] covariance = reference.estimateRegressionParametersVariance();
+    double errorVariance = reference.estimateErrorVariance();
+    double[] parameters = reference.estimateRegressionParameters();
+    for (int k = 0; k <= 5; k++) {
+      assertThat(c[k]).isCloseTo(parameters[k], within(1e-8 * (1 + Math.abs(parameters[k]))));
+      double expected = covariance[k][k] * errorVariance;
+      assertThat(SmallFits.coefficientVariance(u, y, c, k))
+          .as("coefficient %d", k)
+          .isCloseTo(expected, within(1e-8 * expected));
+    }
+    // No degree of freedom left: infinite.
+    double[] six = java.util.Arrays.copyOf(u, 6);
+    double[] sixY = java.util.Arrays.copyOf(y, 6);
+    assertThat(SmallFits.coefficientVariance(six, sixY, SmallFits.polynomial(six, sixY, 5), 2))
+        .isInfinite();
+  }
+
+  @Test
+  @DisplayName(
       "Monotone cubic (Fritsch & Carlson 1980): through the knots, exact on a line, no overshoot"
           + " on step-like data")
   void monotoneCubic() {
