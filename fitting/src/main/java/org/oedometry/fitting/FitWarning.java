@@ -43,6 +43,12 @@ public record FitWarning(Kind kind, String message) {
      * consolidation may not be complete.
      */
     PRIMARY_INCOMPLETE,
+    /**
+     * A reading lies further from the fitted curve than the noise of the others allows (a wild
+     * reading: a misread dial, a knock, a reading taken after the next load): check it; it pulls
+     * the fit.
+     */
+    OUTLYING_READING,
     /** Fewer than half the least-squares starts reached the best fit. */
     STARTS_DISAGREE,
     /**
