@@ -479,7 +479,7 @@ public final class FullCurveMethod {
                   endFactor, lowEndFactor)));
     }
     List<double[]> outlying =
-        outlyingReadings(t, residuals, w, model.curve(fitted), best, parameterCount);
+        outlyingReadings(t, residuals, sumSquares, w, model.curve(fitted), best, parameterCount);
     if (!outlying.isEmpty()) {
       StringBuilder list = new StringBuilder();
       for (int k = 0; k < Math.min(outlying.size(), 5); k++) {
@@ -558,6 +558,12 @@ public final class FullCurveMethod {
   /** Family-wise probability of the Bonferroni test for outlying readings (1 %). */
   static final double OUTLIER_FAMILY_PROBABILITY = 0.01;
 
+  /** Fraction of the bound (times sigma) a residual must exceed to be examined, many readings. */
+  static final double OUTLIER_SCREEN = 0.8;
+
+  /** Weight (mean 1) above which a reading is always examined on many readings. */
+  static final double OUTLIER_HEAVY_WEIGHT = 100.0;
+
   /** Readings at each end always checked for outlying on many readings (high leverage there). */
   private static final int OUTLIER_END_READINGS = 10;
 
@@ -565,51 +571,66 @@ public final class FullCurveMethod {
    * Readings whose externally studentized residual ({@link #studentizedResiduals}) exceeds the
    * Bonferroni bound: Student's t quantile at 1 - {@value #OUTLIER_FAMILY_PROBABILITY}/(2n) for n -
    * p - 1 degrees of freedom (Cook &amp; Weisberg 1982, Residuals and Influence in Regression, ch.
-   * 2: the Bonferroni outlier test).
+   * 2: the Bonferroni outlier test). Above {@link #GROUPING_LIMIT} readings only these are
+   * examined: the first and last ten, those whose weight exceeds {@value #OUTLIER_HEAVY_WEIGHT}
+   * times the mean (isolated on log time, so of high leverage), and those whose residual exceeds
+   * {@value #OUTLIER_SCREEN} of the bound times &sigma;&#770;. The others cannot reach the bound
+   * unless c<sub>i</sub> (&sigma;<sub>(i)</sub>/&sigma;&#770;)<sup>2</sup> &lt; 0.64, while inside
+   * a logger increment c<sub>i</sub> was measured at 0.97 to 1.03 (864 to 86,400 readings); the
+   * test checks that the screen changes nothing on such increments.
    *
+   * @param sumSquares &Sigma; r<sup>2</sup> of the residuals
    * @return {index, t} of each outlying reading, in time order
    */
   static List<double[]> outlyingReadings(
       double[] t,
       double[] residuals,
+      double sumSquares,
       double[] weights,
       ConsolidationCurveModel.Curve curve,
       WeightedLeastSquares.Solution solution,
       int parameterCount) {
     int n = residuals.length;
     List<double[]> found = new ArrayList<>();
-    if (n - parameterCount - 1 < 1) {
+    Studentized studentized =
+        Studentized.of(t, residuals, sumSquares, weights, curve, solution, parameterCount);
+    if (studentized == null) {
       return found;
     }
     double bound =
         studentQuantile(1 - OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - parameterCount - 1);
-    double[] studentized =
-        studentizedResiduals(t, residuals, weights, curve, solution, parameterCount, bound);
-    for (int i = 0; i < n; i++) {
-      if (Math.abs(studentized[i]) > bound) {
-        found.add(new double[] {i, studentized[i]});
+    double screen =
+        n > GROUPING_LIMIT
+            ? OUTLIER_SCREEN * bound * Math.sqrt(studentized.noiseVariance)
+            : Double.NEGATIVE_INFINITY;
+    int ends = Math.min(OUTLIER_END_READINGS, n);
+    int inside = Math.max(ends, n - ends);
+    for (int i = 0; i < ends; i++) {
+      addIfOutlying(found, i, studentized.at(i), bound);
+    }
+    // Inside the increment only the readings that pass the screen (every reading when n is at most
+    // GROUPING_LIMIT: the screen is minus infinity there).
+    for (int i = ends; i < inside; i++) {
+      if (Math.abs(residuals[i]) > screen || weights[i] > OUTLIER_HEAVY_WEIGHT) {
+        addIfOutlying(found, i, studentized.at(i), bound);
       }
+    }
+    for (int i = inside; i < n; i++) {
+      addIfOutlying(found, i, studentized.at(i), bound);
     }
     return found;
   }
 
+  private static void addIfOutlying(List<double[]> found, int index, double value, double bound) {
+    if (Math.abs(value) > bound) {
+      found.add(new double[] {index, value});
+    }
+  }
+
   /**
-   * Externally studentized residuals of the fit, for equal noise &sigma; on every reading and the
-   * design weights W: the residuals are r = (I - P) &epsilon; with P = J A<sup>-1</sup>J<sup>T
-   * </sup>W (linearised at the optimum), so var r<sub>i</sub> = &sigma;<sup>2</sup> c<sub>i</sub>,
-   * c<sub>i</sub> = 1 - 2 w<sub>i</sub> J<sub>i</sub>A<sup>-1</sup>J<sub>i</sub><sup>T</sup> +
-   * J<sub>i</sub>A<sup>-1</sup>BA<sup>-1</sup>J<sub>i</sub><sup>T</sup> (1 - h<sub>ii</sub> for
-   * unit weights; A<sup>-1</sup> and A<sup>-1</sup>BA<sup>-1</sup> from the solution's two
-   * covariances); &sigma;<sub>(i)</sub><sup>2</sup> = ((n - p) &sigma;&#770;<sup>2</sup> -
-   * r<sub>i</sub><sup>2</sup>/c<sub>i</sub>) / (n - p - 1) leaves the reading out, &sigma;&#770;
-   * <sup>2</sup> = &Sigma; r<sup>2</sup>/(n - p), and t<sub>i</sub> = r<sub>i</sub> /
-   * (&sigma;<sub>(i)</sub> &radic;c<sub>i</sub>). Above {@link #GROUPING_LIMIT} readings only those
-   * whose residual exceeds half the screening bound times &sigma;&#770;, and the first and last
-   * ten, are computed (the others, with c<sub>i</sub> close to 1, cannot reach the bound); the rest
-   * are 0, as is any reading whose c<sub>i</sub> or &sigma;<sub>(i)</sub> is not positive.
+   * Externally studentized residuals of the fit, every reading (see {@link Studentized}).
    *
-   * @param bound the bound the caller compares with (for the screening)
-   * @return t<sub>i</sub> for each reading
+   * @return t<sub>i</sub> for each reading (0 where it cannot be formed)
    */
   static double[] studentizedResiduals(
       double[] t,
@@ -617,29 +638,89 @@ public final class FullCurveMethod {
       double[] weights,
       ConsolidationCurveModel.Curve curve,
       WeightedLeastSquares.Solution solution,
-      int parameterCount,
-      double bound) {
-    int n = residuals.length;
-    double[] studentized = new double[n];
-    int freedom = n - parameterCount - 1;
+      int parameterCount) {
     double sumSquares = 0;
     for (double r : residuals) {
       sumSquares += r * r;
     }
-    double noiseVariance = sumSquares / (n - parameterCount);
-    double weightedVariance = solution.weightedResidualSumOfSquares() / (n - parameterCount);
-    if (freedom < 1 || !(noiseVariance > 0) || !(weightedVariance > 0)) {
-      return studentized;
-    }
-    double[][] covariance = solution.covariance();
-    double[][] sandwich = solution.equalNoiseCovariance();
-    double screen = 0.5 * bound * Math.sqrt(noiseVariance);
-    double[] gradient = new double[4];
-    for (int i = 0; i < n; i++) {
-      boolean end = i < OUTLIER_END_READINGS || i >= n - OUTLIER_END_READINGS;
-      if (n > GROUPING_LIMIT && !end && !(Math.abs(residuals[i]) > screen)) {
-        continue;
+    double[] out = new double[residuals.length];
+    Studentized studentized =
+        Studentized.of(t, residuals, sumSquares, weights, curve, solution, parameterCount);
+    if (studentized != null) {
+      for (int i = 0; i < out.length; i++) {
+        out[i] = studentized.at(i);
       }
+    }
+    return out;
+  }
+
+  /**
+   * Externally studentized residuals for equal noise &sigma; on every reading and the design
+   * weights W: the residuals are r = (I - P) &epsilon; with P = J A<sup>-1</sup>J<sup>T</sup>W
+   * (linearised at the optimum), so var r<sub>i</sub> = &sigma;<sup>2</sup> c<sub>i</sub>,
+   * c<sub>i</sub> = 1 - 2 w<sub>i</sub> J<sub>i</sub>A<sup>-1</sup>J<sub>i</sub><sup>T</sup> +
+   * J<sub>i</sub>A<sup>-1</sup>BA<sup>-1</sup>J<sub>i</sub><sup>T</sup> (1 - h<sub>ii</sub> for
+   * unit weights; A<sup>-1</sup> and A<sup>-1</sup>BA<sup>-1</sup> from the solution's two
+   * covariances); &sigma;<sub>(i)</sub><sup>2</sup> = ((n - p) &sigma;&#770;<sup>2</sup> -
+   * r<sub>i</sub><sup>2</sup>/c<sub>i</sub>) / (n - p - 1) leaves the reading out, &sigma;&#770;
+   * <sup>2</sup> = &Sigma; r<sup>2</sup>/(n - p), and t<sub>i</sub> = r<sub>i</sub> /
+   * (&sigma;<sub>(i)</sub> &radic;c<sub>i</sub>). Confined to one call's thread (a gradient
+   * buffer).
+   */
+  private static final class Studentized {
+    private final double[] t;
+    private final double[] residuals;
+    private final double[] weights;
+    private final ConsolidationCurveModel.Curve curve;
+    private final double[][] covariance;
+    private final double[][] sandwich;
+    private final int parameterCount;
+    private final double noiseVariance;
+    private final double weightedVariance;
+    private final double[] gradient = new double[4];
+
+    private Studentized(
+        double[] t,
+        double[] residuals,
+        double[] weights,
+        ConsolidationCurveModel.Curve curve,
+        WeightedLeastSquares.Solution solution,
+        int parameterCount,
+        double noiseVariance,
+        double weightedVariance) {
+      this.t = t;
+      this.residuals = residuals;
+      this.weights = weights;
+      this.curve = curve;
+      this.covariance = solution.covariance();
+      this.sandwich = solution.equalNoiseCovariance();
+      this.parameterCount = parameterCount;
+      this.noiseVariance = noiseVariance;
+      this.weightedVariance = weightedVariance;
+    }
+
+    /** The calculator, or null if there are too few readings or no scatter at all. */
+    static Studentized of(
+        double[] t,
+        double[] residuals,
+        double sumSquares,
+        double[] weights,
+        ConsolidationCurveModel.Curve curve,
+        WeightedLeastSquares.Solution solution,
+        int parameterCount) {
+      int n = residuals.length;
+      double noiseVariance = sumSquares / (n - parameterCount);
+      double weightedVariance = solution.weightedResidualSumOfSquares() / (n - parameterCount);
+      if (n - parameterCount - 1 < 1 || !(noiseVariance > 0) || !(weightedVariance > 0)) {
+        return null;
+      }
+      return new Studentized(
+          t, residuals, weights, curve, solution, parameterCount, noiseVariance, weightedVariance);
+    }
+
+    /** t<sub>i</sub>, or 0 where c<sub>i</sub> or &sigma;<sub>(i)</sub> is not positive. */
+    double at(int i) {
+      int n = residuals.length;
       curve.settlementAndGradient(t[i], gradient);
       double q = 0;
       double g = 0;
@@ -650,13 +731,13 @@ public final class FullCurveMethod {
         }
       }
       double c = 1 - 2 * weights[i] * q / weightedVariance + g / noiseVariance;
-      double leftOut = ((n - parameterCount) * noiseVariance - residuals[i] * residuals[i] / c);
-      if (c > 1e-12 && leftOut > 0) {
-        double value = residuals[i] / Math.sqrt(leftOut / freedom * c);
-        studentized[i] = Double.isFinite(value) ? value : 0.0;
+      double leftOut = (n - parameterCount) * noiseVariance - residuals[i] * residuals[i] / c;
+      if (!(c > 1e-12) || !(leftOut > 0)) {
+        return 0.0;
       }
+      double value = residuals[i] / Math.sqrt(leftOut / (n - parameterCount - 1) * c);
+      return Double.isFinite(value) ? value : 0.0;
     }
-    return studentized;
   }
 
   /** Exponent of 2 of the movement below which (and above which) settlements are scaled. */

@@ -81,8 +81,7 @@ class OutlyingReadingsTest {
     Fitted f = fit(t, y, unit);
     double[] residuals = f.solution().residuals();
     double[] studentized =
-        FullCurveMethod.studentizedResiduals(
-            t, residuals, unit, f.curve(), f.solution(), 4, Double.POSITIVE_INFINITY);
+        FullCurveMethod.studentizedResiduals(t, residuals, unit, f.curve(), f.solution(), 4);
     for (int i = 0; i < t.length; i++) {
       double[][] design = new double[t.length][5];
       for (int r = 0; r < t.length; r++) {
@@ -124,8 +123,7 @@ class OutlyingReadingsTest {
       sumSquares += r * r;
     }
     double[] studentized =
-        FullCurveMethod.studentizedResiduals(
-            t, residuals, w, f.curve(), f.solution(), 4, Double.POSITIVE_INFINITY);
+        FullCurveMethod.studentizedResiduals(t, residuals, w, f.curve(), f.solution(), 4);
     for (int i = 0; i < n; i++) {
       double c = variance.getEntry(i, i);
       double leftOut = (sumSquares - residuals[i] * residuals[i] / c) / (n - 5);
@@ -133,6 +131,56 @@ class OutlyingReadingsTest {
       assertThat(studentized[i])
           .as("reading %d", i)
           .isCloseTo(expected, within(1e-9 * Math.max(1, Math.abs(expected))));
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Above 400 readings the screen (ends, heavy weights, residuals beyond 0.8 of the bound)"
+          + " finds exactly the readings that examining every reading finds: logger readings every"
+          + " 1, 10 and 100 s, and every 10 s with a gap from 1 h to 10 h, wild readings anywhere")
+  void screenChangesNothing() {
+    SplittableRandom random = new SplittableRandom(20261202L);
+    for (int trial = 0; trial < 12; trial++) {
+      double step = new double[] {1, 10, 100}[trial % 3];
+      boolean gap = trial >= 9;
+      int count = (int) (86_400 / step);
+      double[] all = ExactCurves.equalTimes(step, count);
+      double[] t = gap ? Arrays.stream(all).filter(x -> x <= 3_600 || x >= 36_000).toArray() : all;
+      int n = t.length;
+      double[] y =
+          ExactCurves.noisy(ExactCurves.curve(t, TRUTH), 1e-6, random.nextLong())
+              .settlementMetres();
+      for (int k = 0; k < 4; k++) {
+        int index = k == 0 ? random.nextInt(10, 120) : random.nextInt(n);
+        y[index] += (random.nextBoolean() ? 1 : -1) * random.nextDouble(3e-6, 12e-6);
+      }
+      double[] w = FullCurveMethod.weights(t, FullCurveOptions.ReadingWeights.LOG_TIME_BALANCE);
+      Fitted f = fit(t, y, w);
+      double[] residuals = f.solution().residuals();
+      double sumSquares = 0;
+      for (double r : residuals) {
+        sumSquares += r * r;
+      }
+      double bound =
+          FullCurveMethod.studentQuantile(
+              1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
+      double[] every =
+          FullCurveMethod.studentizedResiduals(t, residuals, w, f.curve(), f.solution(), 4);
+      List<Integer> expected = new java.util.ArrayList<>();
+      for (int i = 0; i < n; i++) {
+        if (Math.abs(every[i]) > bound) {
+          expected.add(i);
+        }
+      }
+      List<Integer> screened =
+          FullCurveMethod.outlyingReadings(t, residuals, sumSquares, w, f.curve(), f.solution(), 4)
+              .stream()
+              .map(row -> (int) row[0])
+              .toList();
+      assertThat(n).isGreaterThan(FullCurveMethod.GROUPING_LIMIT);
+      assertThat(screened).as("trial %d (%d readings)", trial, n).isEqualTo(expected);
+      assertThat(expected).as("trial %d finds the wild readings", trial).isNotEmpty();
     }
   }
 
