@@ -291,7 +291,7 @@ public final class InflectionPointMethod {
               Checks.format(
                   "the readings are sparse near the inflection (a local fit spans +/-%.3g log"
                       + " cycle to hold %d readings): on exact curves read at the usual 14 lab"
-                      + " times c_v came within 3.5 %% (T at the last reading 1.6 to 50)",
+                      + " times c_v came within 1 %% (T at the last reading 1 to 50)",
                   neededHalfWidth, wanted)));
     }
     if (endFactor < Terzaghi.TIME_FACTOR_90) {
@@ -421,7 +421,7 @@ public final class InflectionPointMethod {
       if (!(score < bestScore)) {
         continue;
       }
-      Located located = corrected(x, d, data);
+      Located located = corrected(x, data);
       if (located == null) {
         continue;
       }
@@ -442,7 +442,7 @@ public final class InflectionPointMethod {
    * @return the corrected inflection, or null if a fit has no inflection near its centre or the
    *     iteration does not converge
    */
-  private static Located corrected(double[] x, double[] d, Settled data) {
+  private static Located corrected(double[] x, Settled data) {
     int count = data.last - data.first + 1;
     double[] u = new double[count];
     for (int k = 0; k < count; k++) {
@@ -454,7 +454,7 @@ public final class InflectionPointMethod {
       return null;
     }
     // Secant iteration on g(p) = (inflection of the exact curve's fit, inflection placed at p) -
-    // own; g moves nearly one for one with p (1.6 for one for the sparsest windows measured).
+    // own; g moves nearly one for one with p (by 1.6 for 1 on the sparsest windows measured).
     double position = own;
     double residual = exactFitInflection(u, position, data.halfWidth) - own;
     if (Double.isNaN(residual)) {
@@ -493,6 +493,9 @@ public final class InflectionPointMethod {
       return null;
     }
     double primary = derivative(fitted, own, 1) / exactSlope;
+    if (!(primary > 0) || !Double.isFinite(primary)) {
+      return null;
+    }
     double start = derivative(fitted, own, 0) - primary * derivative(exact, own, 0);
     return new Located(
         data.centre + position,
