@@ -47,12 +47,14 @@ import org.oedometry.theory.Terzaghi;
  *       (default 8). Points every 0.02 cycle from the first to the last reading ({@link
  *       #SCAN_STEP}; a grid rather than every reading, so that a data logger's thousands of
  *       readings keep the cost linear) are each the centre of a window of the narrowest half-width
- *       (default 0.2 cycle); a quadratic fitted by least squares over it gives the slope there; the
+ *       (default 0.2 cycle); a quadratic fitted by least squares over it (on every k-th reading
+ *       where the window holds more than {@value #SCAN_READINGS}) gives the slope there; the
  *       steepest is the first guess. On sparse readings (a window of twice the narrowest half-width
  *       around it cannot hold the readings wanted, as on the usual lab schedule of about 3 readings
  *       a cycle) the steepest point of a natural cubic spline through the readings (Commons Math
- *       {@code SplineInterpolator}) is the first guess instead: there a one-sided quadratic at the
- *       last readings can look steeper than the middle.
+ *       {@code SplineInterpolator}; sought on at most {@value #SPLINE_READINGS} readings) is the
+ *       first guess instead: there a one-sided quadratic at the last readings can look steeper than
+ *       the middle.
  *   <li><b>Local fits.</b> For each half-width h from the narrowest to the widest (default 1.2
  *       cycle) in steps of {@value #HALF_WIDTH_STEP} cycle, a polynomial of degree {@value #DEGREE}
  *       fitted by least squares over the window, in u = x - centre, gives the inflection near u =
@@ -141,6 +143,12 @@ public final class InflectionPointMethod {
 
   /** Fewest degrees of freedom a local fit must leave to be a candidate window. */
   private static final int MINIMUM_DEGREES_OF_FREEDOM = 2;
+
+  /**
+   * Most readings for which the spline's steepest point is sought as the first guess on sparse
+   * readings (a data logger's are dense: its thousands of readings go to the scan).
+   */
+  static final int SPLINE_READINGS = 400;
 
   /** Step between the candidate half-widths, log10 cycles. */
   static final double HALF_WIDTH_STEP = 0.1;
@@ -241,7 +249,7 @@ public final class InflectionPointMethod {
     // Sparse readings (a window of twice the narrowest half-width cannot hold the readings wanted
     // around the spline's steepest point): the spline's steepest point is the first guess, as a
     // one-sided quadratic at the ends of such readings can look steeper than the middle.
-    double splineCentre = splineSteepestPoint(x, d);
+    double splineCentre = n <= SPLINE_READINGS ? splineSteepestPoint(x, d) : Double.NaN;
     boolean sparse =
         !Double.isNaN(splineCentre) && nearestReach(x, splineCentre, wanted) > 2 * narrowest;
     double start = sparse ? splineCentre : steepestOnGrid(x, d, narrowest, wanted);
@@ -366,7 +374,7 @@ public final class InflectionPointMethod {
     for (int k = 0; k <= scanSteps; k++) {
       double candidate = Math.min(x[n - 1], x[0] + k * SCAN_STEP);
       int[] window = window(x, candidate, halfWidth, wanted);
-      double[] c = fitAround(x, i -> d[i], window, candidate, 2);
+      double[] c = thinnedQuadratic(x, d, window, candidate);
       if (c != null && c[1] > steepestSlope) {
         steepestSlope = c[1];
         steepestCentre = candidate;
@@ -405,8 +413,11 @@ public final class InflectionPointMethod {
         (int)
             Math.floor(
                 (options.widestHalfWidth() - options.windowHalfWidth()) / HALF_WIDTH_STEP + 1e-9);
-    Located best = null;
-    double bestScore = Double.POSITIVE_INFINITY;
+    // The candidates in order of their bounded variance (the narrower first where equal); the
+    // window correction, the costly part, is made for the best and, only if it fails there, for
+    // the next.
+    List<Settled> candidates = new ArrayList<>();
+    List<Double> scores = new ArrayList<>();
     for (int k = 0; k <= steps; k++) {
       double h = options.windowHalfWidth() + k * HALF_WIDTH_STEP;
       Settled data = settle(x, i -> d[i], start, h, wanted);
@@ -417,18 +428,21 @@ public final class InflectionPointMethod {
       if (freedom < MINIMUM_DEGREES_OF_FREEDOM) {
         continue;
       }
-      double score = data.centreVariance * varianceBoundFactor(freedom);
-      if (!(score < bestScore)) {
-        continue;
-      }
-      Located located = corrected(x, data);
-      if (located == null) {
-        continue;
-      }
-      best = located;
-      bestScore = score;
+      candidates.add(data);
+      scores.add(data.centreVariance * varianceBoundFactor(freedom));
     }
-    return best;
+    Integer[] order = new Integer[candidates.size()];
+    for (int k = 0; k < order.length; k++) {
+      order[k] = k;
+    }
+    Arrays.sort(order, (a, b) -> Double.compare(scores.get(a), scores.get(b)));
+    for (int k : order) {
+      Located located = corrected(x, candidates.get(k));
+      if (located != null) {
+        return located;
+      }
+    }
+    return null;
   }
 
   /**
@@ -749,6 +763,28 @@ public final class InflectionPointMethod {
   private static int insertionPoint(double[] x, double centre) {
     int index = Arrays.binarySearch(x, centre);
     return index < 0 ? -index - 1 : index;
+  }
+
+  /** Most readings a scan window's quadratic uses (every k-th reading of a larger window). */
+  static final int SCAN_READINGS = 256;
+
+  /**
+   * The quadratic of the scan (a first guess only) over a window, on every k-th reading where the
+   * window holds more than {@value #SCAN_READINGS} (k the smallest stride that brings it to at most
+   * that many): on a data logger's dense readings the scan's cost no longer grows with their
+   * number.
+   */
+  private static double[] thinnedQuadratic(double[] x, double[] d, int[] window, double centre) {
+    int count = window[1] - window[0] + 1;
+    int stride = (count + SCAN_READINGS - 1) / SCAN_READINGS;
+    int used = (count + stride - 1) / stride;
+    double[] u = new double[used];
+    double[] values = new double[used];
+    for (int k = 0; k < used; k++) {
+      u[k] = x[window[0] + k * stride] - centre;
+      values[k] = d[window[0] + k * stride];
+    }
+    return SmallFits.polynomial(u, values, 2);
   }
 
   /** Polynomial of the given degree in u = x - centre over the window. */

@@ -72,6 +72,23 @@ class InflectionPointMethodTest {
 
   @Test
   @DisplayName(
+      "Data logger, a reading every 10 s for 24 h (8,640 readings; the scan thins its windows to 256"
+          + " readings, no spline), exact curves with c_v 0.3 to 10 m^2/yr: c_v, d0 and d100 to"
+          + " 1e-6")
+  void dataLoggerReadings() {
+    double[] t = ExactCurves.equalTimes(10, 8640);
+    for (double cvPerYear : new double[] {0.3, 1, 3, 10}) {
+      double cv = cvPerYear / ExactCurves.YEAR;
+      CurveParameters truth = CurveParameters.of(0.02e-3, 0.5e-3, cv, 0);
+      InflectionPointResult r = InflectionPointMethod.fit(ExactCurves.curve(t, truth), H);
+      assertThat(r.cv() / cv - 1).as("%s m^2/yr", cvPerYear).isCloseTo(0, within(1e-6));
+      assertThat(r.d0()).isCloseTo(0.02e-3, within(1e-6 * 0.5e-3));
+      assertThat(r.d100()).isCloseTo(0.52e-3, within(1e-6 * 0.5e-3));
+    }
+  }
+
+  @Test
+  @DisplayName(
       "Exact curves with secondary compression 1 and 2 % of d_p a cycle (our forward model), 10 to"
           + " 1,000 readings a cycle: c_v within 0.5 % (measured up to 0.42 %: the creep moves the"
           + " steepest point itself)")
