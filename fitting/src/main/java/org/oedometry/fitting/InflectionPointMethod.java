@@ -2,7 +2,9 @@ package org.oedometry.fitting;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.IntToDoubleFunction;
 import org.apache.commons.math3.analysis.interpolation.SplineInterpolator;
 import org.apache.commons.math3.analysis.polynomials.PolynomialFunction;
@@ -418,9 +420,19 @@ public final class InflectionPointMethod {
     // the next.
     List<Settled> candidates = new ArrayList<>();
     List<Double> scores = new ArrayList<>();
+    // The chi-squared quantile costs some 20 us: once per number of degrees of freedom (on sparse
+    // readings every window holds the same readings).
+    Map<Integer, Double> boundFactors = new HashMap<>();
+    Settled previous = null;
     for (int k = 0; k <= steps; k++) {
       double h = options.windowHalfWidth() + k * HALF_WIDTH_STEP;
+      if (previous != null && previous.narrowestReach >= h) {
+        // Every window of the previous fit held the wanted readings only by reaching beyond h:
+        // this half-width moves through the same windows to the same fit (sparse readings).
+        continue;
+      }
       Settled data = settle(x, i -> d[i], start, h, wanted);
+      previous = data;
       if (data == null) {
         continue;
       }
@@ -429,7 +441,9 @@ public final class InflectionPointMethod {
         continue;
       }
       candidates.add(data);
-      scores.add(data.centreVariance * varianceBoundFactor(freedom));
+      scores.add(
+          data.centreVariance
+              * boundFactors.computeIfAbsent(freedom, InflectionPointMethod::varianceBoundFactor));
     }
     Integer[] order = new Integer[candidates.size()];
     for (int k = 0; k < order.length; k++) {
@@ -604,8 +618,10 @@ public final class InflectionPointMethod {
 
   /**
    * A local fit settled on its inflection: centre, coefficients in u = x - centre, the window, its
-   * half-width, whether it settled within {@value #MAX_ITERATIONS} moves, and the delta-method
-   * variance of the centre, var(a<sub>2</sub>) / (9 a<sub>3</sub><sup>2</sup>).
+   * half-width, whether it settled within {@value #MAX_ITERATIONS} moves, the delta-method variance
+   * of the centre, var(a<sub>2</sub>) / (9 a<sub>3</sub><sup>2</sup>), and the smallest reach of
+   * the wanted nearest readings over the centres visited (a wider half-width up to it gives the
+   * same windows, so the same fit).
    */
   private record Settled(
       double centre,
@@ -614,7 +630,8 @@ public final class InflectionPointMethod {
       int last,
       double halfWidth,
       boolean settled,
-      double centreVariance) {}
+      double centreVariance,
+      double narrowestReach) {}
 
   /**
    * Step 3 of the class description: moves a window of the given half-width onto the zero of its
@@ -628,8 +645,11 @@ public final class InflectionPointMethod {
     int n = x.length;
     double centre = start;
     boolean settled = false;
+    double narrowestReach = Double.POSITIVE_INFINITY;
     for (int k = 0; k < MAX_ITERATIONS; k++) {
-      int[] window = window(x, centre, halfWidth, wanted);
+      double reach = nearestReach(x, centre, wanted);
+      narrowestReach = Math.min(narrowestReach, reach);
+      int[] window = within(x, centre, Math.max(halfWidth, reach));
       double[] local = fitAround(x, y, window, centre, DEGREE);
       if (local == null || !(local[3] < 0)) {
         return null;
@@ -646,7 +666,9 @@ public final class InflectionPointMethod {
         return null;
       }
     }
-    int[] window = window(x, centre, halfWidth, wanted);
+    double finalReach = nearestReach(x, centre, wanted);
+    narrowestReach = Math.min(narrowestReach, finalReach);
+    int[] window = within(x, centre, Math.max(halfWidth, finalReach));
     int count = window[1] - window[0] + 1;
     double[] u = new double[count];
     double[] values = new double[count];
@@ -664,7 +686,8 @@ public final class InflectionPointMethod {
       return null;
     }
     double reach = Math.max(centre - x[window[0]], x[window[1]] - centre);
-    return new Settled(centre, local, window[0], window[1], reach, settled, centreVariance);
+    return new Settled(
+        centre, local, window[0], window[1], reach, settled, centreVariance, narrowestReach);
   }
 
   /**
@@ -722,8 +745,12 @@ public final class InflectionPointMethod {
    * @return {first index, last index}, inclusive
    */
   static int[] window(double[] x, double centre, double halfWidth, int wanted) {
+    return within(x, centre, Math.max(halfWidth, nearestReach(x, centre, wanted)));
+  }
+
+  /** The readings within &plusmn;h of the centre: {first index, last index}, inclusive. */
+  private static int[] within(double[] x, double centre, double h) {
     int n = x.length;
-    double h = Math.max(halfWidth, nearestReach(x, centre, wanted));
     int first = insertionPoint(x, centre);
     int last = first - 1;
     while (first > 0 && centre - x[first - 1] <= h) {
