@@ -498,11 +498,12 @@ public final class FullCurveMethod {
               FitWarning.Kind.OUTLYING_READING,
               Checks.format(
                   "%d reading%s lie%s further from the fitted curve than the scatter of the others"
-                      + " allows (externally studentized residual beyond the 5 %% Bonferroni"
+                      + " allows (externally studentized residual beyond the %.3g %% Bonferroni"
                       + " bound): %s; check %s, a wild reading pulls the fit",
                   outlying.size(),
                   outlying.size() == 1 ? "" : "s",
                   outlying.size() == 1 ? "s" : "",
+                  100 * OUTLIER_FAMILY_PROBABILITY,
                   list,
                   outlying.size() == 1 ? "it" : "them")));
     }

@@ -198,7 +198,10 @@ class OutlyingReadingsTest {
     List<FitWarning> warnings =
         wild.warnings().stream().filter(w -> w.is(FitWarning.Kind.OUTLYING_READING)).toList();
     assertThat(warnings).hasSize(1);
-    assertThat(warnings.get(0).message()).startsWith("1 reading lies").contains("index 6 (t = 480");
+    assertThat(warnings.get(0).message())
+        .startsWith("1 reading lies")
+        .contains("beyond the 1 % Bonferroni bound")
+        .contains("index 6 (t = 480");
   }
 
   @Test
