@@ -498,7 +498,7 @@ public final class FullCurveMethod {
               FitWarning.Kind.OUTLYING_READING,
               Checks.format(
                   "%d reading%s lie%s further from the fitted curve than the scatter of the others"
-                      + " allows (externally studentized residual beyond the %.3g %% Bonferroni"
+                      + " allows (externally studentized residual beyond the %.2g %% Bonferroni"
                       + " bound): %s; check %s, a wild reading pulls the fit",
                   outlying.size(),
                   outlying.size() == 1 ? "" : "s",

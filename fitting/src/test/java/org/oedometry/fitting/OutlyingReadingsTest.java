@@ -200,7 +200,7 @@ class OutlyingReadingsTest {
     assertThat(warnings).hasSize(1);
     assertThat(warnings.get(0).message())
         .startsWith("1 reading lies")
-        .contains("beyond the 1 % Bonferroni bound")
+        .contains("beyond the 1.0 % Bonferroni bound")
         .contains("index 6 (t = 480");
   }
 
