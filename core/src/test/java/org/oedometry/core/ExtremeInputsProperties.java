@@ -76,11 +76,10 @@ class ExtremeInputsProperties {
 
   /**
    * For void ratios: exponents from -200 to 200, and 10<sup>-308</sup>, 10<sup>-307</sup> and
-   * 10<sup>300</sup> drawn often (nearer the top of the double range the ordinates of the
-   * preconsolidation constructions' straight lines overflow: not covered here).
+   * 10<sup>308</sup> drawn often.
    */
   private static Gen<Double> voidRatioExponents() {
-    return doubles().between(-200, 200).mix(Generate.pick(List.of(-308.0, -307.0, 300.0, 0.0)), 30);
+    return doubles().between(-200, 200).mix(Generate.pick(List.of(-308.0, -307.0, 308.0, 0.0)), 30);
   }
 
   /** 2 to 2000 readings, mostly few. */

@@ -107,7 +107,37 @@ public final class PachecoSilvaMethod {
     }
     double e0 = curve.initialVoidRatio();
     double xa = (e0 - virgin.intercept()) / virgin.slope();
-    lines.add(ConstructionLine.along("virgin line", virgin, Math.min(xa, x[n - 1]), x[n - 1]));
+    if (!Double.isFinite(xa)) {
+      // e0 - intercept overflowed: the same abscissa term by term, finite where it exists.
+      xa = e0 / virgin.slope() - virgin.intercept() / virgin.slope();
+    }
+    if (!Double.isFinite(xa)) {
+      lines.add(ConstructionLine.along("virgin line", virgin, x[n - count], x[n - 1]));
+      return PreconsolidationEstimate.absent(
+          method,
+          String.format(
+              Locale.ROOT,
+              "the virgin line (slope %s, intercept %s per log cycle) reaches the initial void"
+                  + " ratio %s only beyond the range of numbers, far outside the loaded range"
+                  + " %s..%s Pa",
+              virgin.slope(),
+              virgin.intercept(),
+              e0,
+              env.stress[0],
+              env.stress[n - 1]),
+          AXES,
+          List.of(),
+          lines,
+          env.idList(0, n),
+          warnings);
+    }
+    // Drawn down to where it meets e0, or over its own points where the line's ordinate there is
+    // beyond the double range (only with void ratios near 1e308: the estimate is absent then).
+    double drawnFrom = Math.min(xa, x[n - 1]);
+    if (!Double.isFinite(virgin.valueAt(drawnFrom))) {
+      drawnFrom = x[n - count];
+    }
+    lines.add(ConstructionLine.along("virgin line", virgin, drawnFrom, x[n - 1]));
     lines.add(new ConstructionLine("initial void ratio", x[0], e0, Math.max(xa, x[0]), e0));
     List<ConstructionPoint> points = new ArrayList<>();
     points.add(new ConstructionPoint("virgin line at initial void ratio", xa, e0));

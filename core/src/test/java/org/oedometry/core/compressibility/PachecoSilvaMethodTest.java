@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.List;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -132,5 +133,48 @@ class PachecoSilvaMethodTest {
     assertThatThrownBy(() -> PreconsolidationOptions.builder().virginLinePoints(1).build())
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("virgin line points (1) must be >= 2");
+  }
+
+  @Test
+  @DisplayName(
+      "Void ratios near the top of the double range (e0 = 1.5e308, virgin line slope -5e305 per"
+          + " cycle at stresses near 1e-307 Pa, invented): e0 minus the intercept overflows, the"
+          + " abscissa is taken term by term and the estimate is absent (outside the loaded range)"
+          + " with finite geometry, not an exception")
+  void abscissaBeyondTheDoubleRange() {
+    // Virgin line e = b + m log10(s') with m = -5e305, b = -6e307: e0 - b = 2.1e308 overflows,
+    // e0/m - b/m = -420 does not.
+    double slope = -5e305;
+    double intercept = -6e307;
+    double[] stresses = {3e-308, 6e-308, 1.2e-307, 2.4e-307};
+    double[] voidRatios = new double[stresses.length];
+    voidRatios[0] = 1.45e308;
+    for (int j = 1; j < stresses.length; j++) {
+      voidRatios[j] = intercept + slope * Math.log10(stresses[j]);
+    }
+    CompressionCurve c = CompressionCurve.of(1.5e308, 2.5e-308, stresses, voidRatios);
+    PreconsolidationEstimate est = PachecoSilvaMethod.estimate(c);
+    assertThat(est.preconsolidationPressure()).isEmpty();
+    assertThat(est.absenceReason()).contains("outside the loaded range");
+    for (ConstructionPoint p : est.points()) {
+      assertThat(List.of(p.x(), p.y())).allMatch(Double::isFinite);
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "A virgin line almost flat (slope -1e-10 per cycle) with e0 = 1.7e308 (invented): the virgin"
+          + " line reaches e0 only beyond the range of numbers, absent with that reason")
+  void virginLineReachesTheInitialVoidRatioBeyondTheDoubleRange() {
+    double[] stresses = {1, 2, 4, 8};
+    double[] voidRatios = {1.5e308, 1.0, 1.0 - 3.0103e-11, 1.0 - 6.0206e-11};
+    CompressionCurve c = CompressionCurve.of(1.7e308, 0.5, stresses, voidRatios);
+    PreconsolidationEstimate est = PachecoSilvaMethod.estimate(c);
+    assertThat(est.preconsolidationPressure()).isEmpty();
+    assertThat(est.absenceReason()).contains("only beyond the range of numbers");
+    assertThat(est.lines()).isNotEmpty();
+    for (ConstructionLine line : est.lines()) {
+      assertThat(List.of(line.x1(), line.y1(), line.x2(), line.y2())).allMatch(Double::isFinite);
+    }
   }
 }
