@@ -106,11 +106,7 @@ public final class PachecoSilvaMethod {
           warnings);
     }
     double e0 = curve.initialVoidRatio();
-    double xa = (e0 - virgin.intercept()) / virgin.slope();
-    if (!Double.isFinite(xa)) {
-      // e0 - intercept overflowed: the same abscissa term by term, finite where it exists.
-      xa = e0 / virgin.slope() - virgin.intercept() / virgin.slope();
-    }
+    double xa = abscissaAt(virgin, e0);
     if (!Double.isFinite(xa)) {
       lines.add(ConstructionLine.along("virgin line", virgin, x[n - count], x[n - 1]));
       return PreconsolidationEstimate.absent(
@@ -159,7 +155,17 @@ public final class PachecoSilvaMethod {
           warnings);
     }
     double eb = interpolate(x, e, xa);
-    double xc = (eb - virgin.intercept()) / virgin.slope();
+    double xc = abscissaAt(virgin, eb);
+    if (!Double.isFinite(xc)) {
+      return PreconsolidationEstimate.absent(
+          method,
+          "the construction leaves the range of representable stresses",
+          AXES,
+          points,
+          lines,
+          env.idList(0, n),
+          warnings);
+    }
     points.add(new ConstructionPoint("curve below that point", xa, eb));
     points.add(new ConstructionPoint("preconsolidation pressure on virgin line", xc, eb));
     lines.add(new ConstructionLine("vertical to the curve", xa, e0, xa, eb));
@@ -178,6 +184,16 @@ public final class PachecoSilvaMethod {
     env.rangeWarning(pressure, warnings);
     return PreconsolidationEstimate.found(
         method, pressure, AXES, points, lines, env.idList(0, n), warnings);
+  }
+
+  /**
+   * The abscissa where the line reaches y, (y - b)/m; taken term by term, y/m - b/m, where y - b
+   * overflows (void ratios near 10<sup>308</sup>). Infinite only where the abscissa itself is
+   * beyond the double range.
+   */
+  static double abscissaAt(LineFit line, double y) {
+    double x = (y - line.intercept()) / line.slope();
+    return Double.isFinite(x) ? x : y / line.slope() - line.intercept() / line.slope();
   }
 
   /** Piecewise-linear interpolation of y(x), x strictly increasing, x[0] <= t <= x[n-1]. */

@@ -177,4 +177,24 @@ class PachecoSilvaMethodTest {
       assertThat(List.of(line.x1(), line.y1(), line.x2(), line.y2())).allMatch(Double::isFinite);
     }
   }
+
+  @Test
+  @DisplayName(
+      "Abscissa where a line reaches y: (y - b)/m, and term by term where y - b overflows; checked"
+          + " against exact BigDecimal arithmetic (second formula)")
+  void abscissaAt() {
+    // Line through (-307.2, 0.936e308) and (-306.6, 0.933e308): slope -5e305, intercept -6e307.
+    double[] x = {-307.2, -306.6};
+    double[] y = {-6e307 + -5e305 * x[0], -6e307 + -5e305 * x[1]};
+    LineFit line = LineFit.through(x, y, 0, 2);
+    for (double target : new double[] {0.935e308, 1.5e308, 1.7e308}) {
+      java.math.BigDecimal exact =
+          new java.math.BigDecimal(target)
+              .subtract(new java.math.BigDecimal(line.intercept()))
+              .divide(new java.math.BigDecimal(line.slope()), java.math.MathContext.DECIMAL64);
+      assertThat(PachecoSilvaMethod.abscissaAt(line, target))
+          .as("y = %s", target)
+          .isCloseTo(exact.doubleValue(), within(1e-12 * Math.abs(exact.doubleValue())));
+    }
+  }
 }
