@@ -3,6 +3,7 @@ package org.oedometry.fitting;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.stream.IntStream;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegrator;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactory;
 import org.oedometry.core.SettlementCurve;
@@ -368,14 +369,15 @@ public final class RectangularHyperbolaMethod {
                   + " consolidation to analyse",
               d[n - 1], d0));
     }
-    boolean[] chosen = new boolean[n];
-    for (int i = 0; i < n; i++) {
-      double delta = d[i] - d0;
-      chosen[i] = delta >= LOWER_DEGREE * last && delta <= UPPER_DEGREE * last;
-    }
+    // The chosen readings, by index in time order: first by the degree of movement, then (the
+    // times being increasing) the index range between t60 and t90, found by binary search.
+    int[] chosen =
+        IntStream.range(0, n)
+            .filter(i -> d[i] - d0 >= LOWER_DEGREE * last && d[i] - d0 <= UPPER_DEGREE * last)
+            .toArray();
     int iterations = 0;
     for (int k = 0; k < MAX_ITERATIONS; k++) {
-      if (count(chosen) < 2) {
+      if (chosen.length < 2) {
         if (resample) {
           return resampled(t, d, d0, iterations);
         }
@@ -386,16 +388,13 @@ public final class RectangularHyperbolaMethod {
       double ratio = (HYPERBOLA_SLOPE / HYPERBOLA_INTERCEPT) * line[0] / line[1];
       double t60 = Terzaghi.timeFactor(LOWER_DEGREE) * ratio;
       double t90 = Terzaghi.timeFactor(UPPER_DEGREE) * ratio;
-      boolean[] next = new boolean[n];
-      for (int i = 0; i < n; i++) {
-        next[i] = t[i] >= t60 && t[i] <= t90;
-      }
+      int[] next = IntStream.range(firstAtOrAfter(t, t60), firstAfter(t, t90)).toArray();
       if (Arrays.equals(next, chosen)) {
         return new Hyperbola(line[0], line[1], true, iterations, false, used(t, d, d0, chosen));
       }
       chosen = next;
     }
-    if (count(chosen) < 2) {
+    if (chosen.length < 2) {
       if (resample) {
         return resampled(t, d, d0, iterations);
       }
@@ -526,12 +525,34 @@ public final class RectangularHyperbolaMethod {
     return ratio;
   }
 
-  private static int count(boolean[] chosen) {
-    int count = 0;
-    for (boolean c : chosen) {
-      count += c ? 1 : 0;
+  /** Index of the first time at or after the limit (t increasing; n if none). */
+  static int firstAtOrAfter(double[] t, double limit) {
+    int low = 0;
+    int high = t.length;
+    while (low < high) {
+      int mid = (low + high) >>> 1;
+      if (t[mid] >= limit) {
+        high = mid;
+      } else {
+        low = mid + 1;
+      }
     }
-    return count;
+    return low;
+  }
+
+  /** Index of the first time after the limit (t increasing; n if none). */
+  static int firstAfter(double[] t, double limit) {
+    int low = 0;
+    int high = t.length;
+    while (low < high) {
+      int mid = (low + high) >>> 1;
+      if (t[mid] > limit) {
+        high = mid;
+      } else {
+        low = mid + 1;
+      }
+    }
+    return low;
   }
 
   private static FitException tooFew(double[] t, double[] d) {
@@ -543,35 +564,30 @@ public final class RectangularHyperbolaMethod {
             t[t.length - 1], d[d.length - 1]));
   }
 
-  private static List<PlotPoint> used(double[] t, double[] d, double d0, boolean[] chosen) {
+  private static List<PlotPoint> used(double[] t, double[] d, double d0, int[] chosen) {
     List<PlotPoint> used = new ArrayList<>();
-    for (int i = 0; i < t.length; i++) {
-      if (chosen[i]) {
-        used.add(new PlotPoint(t[i], timeOverMovement(t[i], d[i] - d0)));
-      }
+    for (int i : chosen) {
+      used.add(new PlotPoint(t[i], timeOverMovement(t[i], d[i] - d0)));
     }
     return used;
   }
 
   /** {c, m} of t/(d - d0) = m t + c over the chosen readings. */
-  private static double[] fitLine(double[] t, double[] d, double d0, boolean[] chosen) {
-    int count = count(chosen);
+  private static double[] fitLine(double[] t, double[] d, double d0, int[] chosen) {
+    int count = chosen.length;
     double[] x = new double[count];
     double[] y = new double[count];
-    int k = 0;
-    for (int i = 0; i < t.length; i++) {
-      if (chosen[i]) {
-        if (!(d[i] - d0 > 0)) {
-          throw new FitException(
-              Checks.format(
-                  "the reading at %.4g s (%s m) in the 60-90 %% range has not moved from the"
-                      + " zero (%s m)",
-                  t[i], d[i], d0));
-        }
-        x[k] = t[i];
-        y[k] = timeOverMovement(t[i], d[i] - d0);
-        k++;
+    for (int k = 0; k < count; k++) {
+      int i = chosen[k];
+      if (!(d[i] - d0 > 0)) {
+        throw new FitException(
+            Checks.format(
+                "the reading at %.4g s (%s m) in the 60-90 %% range has not moved from the zero"
+                    + " (%s m)",
+                t[i], d[i], d0));
       }
+      x[k] = t[i];
+      y[k] = timeOverMovement(t[i], d[i] - d0);
     }
     double[] line = SmallFits.line(x, y);
     if (line == null || !(line[1] > 0) || !(line[0] > 0)) {
