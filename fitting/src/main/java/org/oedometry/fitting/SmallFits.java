@@ -30,21 +30,27 @@ final class SmallFits {
     if (!(scale > 0)) {
       scale = 1;
     }
-    double[][] a = new double[m][m + 1];
-    double[] powers = new double[2 * m - 1];
+    // The normal matrix is a Hankel matrix: entry (r, c) is the power sum of order r + c, so 2m - 1
+    // sums a point (added in the same order as entry by entry: the same bits).
+    double[] powerSums = new double[2 * m - 1];
+    double[] right = new double[m];
     for (int i = 0; i < u.length; i++) {
       double v = u[i] / scale;
       double p = 1;
-      for (int k = 0; k < powers.length; k++) {
-        powers[k] = p;
+      for (int k = 0; k < powerSums.length; k++) {
+        powerSums[k] += p;
+        if (k < m) {
+          right[k] += p * y[i];
+        }
         p *= v;
       }
-      for (int r = 0; r < m; r++) {
-        for (int c = 0; c < m; c++) {
-          a[r][c] += powers[r + c];
-        }
-        a[r][m] += powers[r] * y[i];
+    }
+    double[][] a = new double[m][m + 1];
+    for (int r = 0; r < m; r++) {
+      for (int c = 0; c < m; c++) {
+        a[r][c] = powerSums[r + c];
       }
+      a[r][m] = right[r];
     }
     double[] solution = solve(a);
     if (solution == null) {
@@ -87,8 +93,7 @@ final class SmallFits {
       scale = 1;
     }
     double squares = 0;
-    double[][] a = new double[m][m + 1];
-    double[] powers = new double[2 * m - 1];
+    double[] powerSums = new double[2 * m - 1];
     for (int i = 0; i < n; i++) {
       double fitted = 0;
       for (int k = m - 1; k >= 0; k--) {
@@ -98,14 +103,15 @@ final class SmallFits {
       squares += residual * residual;
       double v = u[i] / scale;
       double p = 1;
-      for (int k = 0; k < powers.length; k++) {
-        powers[k] = p;
+      for (int k = 0; k < powerSums.length; k++) {
+        powerSums[k] += p;
         p *= v;
       }
-      for (int r = 0; r < m; r++) {
-        for (int c = 0; c < m; c++) {
-          a[r][c] += powers[r + c];
-        }
+    }
+    double[][] a = new double[m][m + 1];
+    for (int r = 0; r < m; r++) {
+      for (int c = 0; c < m; c++) {
+        a[r][c] = powerSums[r + c];
       }
     }
     a[index][m] = 1;
