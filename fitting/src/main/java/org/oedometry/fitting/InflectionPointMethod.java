@@ -475,11 +475,7 @@ public final class InflectionPointMethod {
    *     iteration does not converge
    */
   private static Located corrected(double[] x, Settled data) {
-    int count = data.last - data.first + 1;
-    double[] u = new double[count];
-    for (int k = 0; k < count; k++) {
-      u[k] = x[data.first + k] - data.centre;
-    }
+    double[] u = abscissae(x, new int[] {data.first, data.last}, data.centre);
     double[] fitted = data.coefficients;
     double own = inflectionOf(fitted, data.halfWidth);
     if (Double.isNaN(own)) {
@@ -673,13 +669,8 @@ public final class InflectionPointMethod {
     double finalReach = nearestReach(x, centre, wanted);
     narrowestReach = Math.min(narrowestReach, finalReach);
     int[] window = within(x, centre, Math.max(halfWidth, finalReach));
-    int count = window[1] - window[0] + 1;
-    double[] u = new double[count];
-    double[] values = new double[count];
-    for (int k = 0; k < count; k++) {
-      u[k] = x[window[0] + k] - centre;
-      values[k] = y.applyAsDouble(window[0] + k);
-    }
+    double[] u = abscissae(x, window, centre);
+    double[] values = values(y, window);
     double[] local = SmallFits.polynomial(u, values, DEGREE);
     if (local == null || !(local[1] > 0) || !(local[3] < 0)) {
       return null;
@@ -821,13 +812,24 @@ public final class InflectionPointMethod {
   /** Polynomial of the given degree in u = x - centre over the window. */
   private static double[] fitAround(
       double[] x, IntToDoubleFunction y, int[] window, double centre, int degree) {
-    int count = window[1] - window[0] + 1;
-    double[] u = new double[count];
-    double[] values = new double[count];
-    for (int k = 0; k < count; k++) {
+    return SmallFits.polynomial(abscissae(x, window, centre), values(y, window), degree);
+  }
+
+  /** u = x - centre for the window's readings. */
+  private static double[] abscissae(double[] x, int[] window, double centre) {
+    double[] u = new double[window[1] - window[0] + 1];
+    for (int k = 0; k < u.length; k++) {
       u[k] = x[window[0] + k] - centre;
+    }
+    return u;
+  }
+
+  /** The values at the window's readings. */
+  private static double[] values(IntToDoubleFunction y, int[] window) {
+    double[] values = new double[window[1] - window[0] + 1];
+    for (int k = 0; k < values.length; k++) {
       values[k] = y.applyAsDouble(window[0] + k);
     }
-    return SmallFits.polynomial(u, values, degree);
+    return values;
   }
 }

@@ -2,7 +2,6 @@ package org.oedometry.examples.bench;
 
 import java.util.Arrays;
 import java.util.Locale;
-import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.FullCurveMethod;
@@ -44,10 +43,7 @@ import org.openjdk.jmh.annotations.Warmup;
 public class FullCurveBenchmark {
 
   private static final double YEAR = 365.25 * 86_400;
-  private static final double DRAINAGE_PATH = 0.0095;
-  private static final double[] LAB_MINUTES = {
-    0.1, 0.25, 0.5, 1, 2, 4, 8, 15, 30, 60, 120, 240, 480, 1440
-  };
+  private static final double DRAINAGE_PATH = BenchmarkIncrement.DRAINAGE_PATH;
 
   /** Readings per increment: 14 (lab schedule) or 8640 (data logger). */
   @Param({"14", "8640"})
@@ -59,20 +55,11 @@ public class FullCurveBenchmark {
   private double[] weights;
   private double[] start;
 
-  /** Makes the increment and the common start of the refinement benchmarks. */
+  /** Makes the increment ({@link BenchmarkIncrement}) and the common start of the refinements. */
   @Setup(Level.Trial)
   public void setUp() {
-    times = new double[readings];
-    for (int i = 0; i < readings; i++) {
-      times[i] = readings == LAB_MINUTES.length ? 60 * LAB_MINUTES[i] : 10.0 * (i + 1);
-    }
-    CurveParameters truth = CurveParameters.of(0.015e-3, 0.5e-3, 1.5 / YEAR, 0.02e-3);
-    ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
-    SplittableRandom random = new SplittableRandom(42);
-    settlements = new double[readings];
-    for (int i = 0; i < readings; i++) {
-      settlements[i] = model.settlement(times[i], truth) + 1e-6 * random.nextGaussian();
-    }
+    times = BenchmarkIncrement.times(readings);
+    settlements = BenchmarkIncrement.settlements(times);
     curve = SettlementCurve.of(times, settlements);
     weights = new double[readings];
     Arrays.fill(weights, 1.0);

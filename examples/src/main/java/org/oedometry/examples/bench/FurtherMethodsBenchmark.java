@@ -1,6 +1,5 @@
 package org.oedometry.examples.bench;
 
-import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.EarlySlopeMethod;
@@ -12,8 +11,6 @@ import org.oedometry.fitting.LogTimeResult;
 import org.oedometry.fitting.MethodComparison;
 import org.oedometry.fitting.RectangularHyperbolaMethod;
 import org.oedometry.fitting.RectangularHyperbolaResult;
-import org.oedometry.theory.ConsolidationCurveModel;
-import org.oedometry.theory.CurveParameters;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -43,11 +40,7 @@ import org.openjdk.jmh.annotations.Warmup;
 @State(Scope.Benchmark)
 public class FurtherMethodsBenchmark {
 
-  private static final double YEAR = 365.25 * 86_400;
-  private static final double DRAINAGE_PATH = 0.0095;
-  private static final double[] LAB_MINUTES = {
-    0.1, 0.25, 0.5, 1, 2, 4, 8, 15, 30, 60, 120, 240, 480, 1440
-  };
+  private static final double DRAINAGE_PATH = BenchmarkIncrement.DRAINAGE_PATH;
 
   /** Readings per increment: 14 (lab schedule) or 8640 (data logger). */
   @Param({"14", "8640"})
@@ -55,21 +48,10 @@ public class FurtherMethodsBenchmark {
 
   private SettlementCurve curve;
 
-  /** Makes the increment (the same as {@link FullCurveBenchmark}'s). */
+  /** Makes the increment ({@link BenchmarkIncrement}, as in {@link FullCurveBenchmark}). */
   @Setup(Level.Trial)
   public void setUp() {
-    double[] times = new double[readings];
-    for (int i = 0; i < readings; i++) {
-      times[i] = readings == LAB_MINUTES.length ? 60 * LAB_MINUTES[i] : 10.0 * (i + 1);
-    }
-    CurveParameters truth = CurveParameters.of(0.015e-3, 0.5e-3, 1.5 / YEAR, 0.02e-3);
-    ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
-    SplittableRandom random = new SplittableRandom(42);
-    double[] settlements = new double[readings];
-    for (int i = 0; i < readings; i++) {
-      settlements[i] = model.settlement(times[i], truth) + 1e-6 * random.nextGaussian();
-    }
-    curve = SettlementCurve.of(times, settlements);
+    curve = BenchmarkIncrement.curve(readings);
   }
 
   /**
