@@ -346,6 +346,25 @@ class InflectionPointMethodTest {
   }
 
   @Test
+  @DisplayName(
+      "Readings rising along a straight ramp on log time over two cycles between two flats"
+          + " (invented; no curvature inside the ramp, so no single inflection): the window moves"
+          + " from corner to corner and does not settle, and the result says so")
+  void rampDoesNotSettle() {
+    int n = 60;
+    double[] t = new double[n];
+    double[] d = new double[n];
+    for (int i = 0; i < n; i++) {
+      t[i] = 6 * Math.pow(10, 4.0 * i / (n - 1));
+      double x = Math.log10(t[i]) - 2.8;
+      d[i] = 1e-3 * Math.max(0, Math.min(1, (x + 1) / 2));
+    }
+    InflectionPointResult r = InflectionPointMethod.fit(SettlementCurve.of(t, d), H);
+    assertThat(r.hasWarning(FitWarning.Kind.READING_CHOICE_NOT_SETTLED)).isTrue();
+    assertThat(r.cv()).isPositive().isFinite();
+  }
+
+  @Test
   void rejectsBadInput() {
     SettlementCurve good = ExactCurves.dense(2 / ExactCurves.YEAR, 0);
     assertThatThrownBy(() -> InflectionPointMethod.fit(good, 0))
