@@ -107,7 +107,7 @@ public record InflectionPointResult(
 
   /**
    * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year), t<sub>I</sub> in min,
-   * settlements in mm and the warnings' kinds.
+   * settlements in mm, the window and its correction, and the warnings' kinds.
    *
    * @return the summary
    */
@@ -115,7 +115,8 @@ public record InflectionPointResult(
   public String toString() {
     return Checks.format(
         "InflectionPointResult[cv %.4g m^2/yr, t_I %.4g min, d_I %.4f mm, slope %.4f mm/log cycle,"
-            + " d0 %.4f mm, d100 %.4f mm, %d readings in window, H_dr %.4g mm, warnings %s]",
+            + " d0 %.4f mm, d100 %.4f mm, %d readings in window of +/-%.3g log cycle (correction"
+            + " %.3g cycle), H_dr %.4g mm, warnings %s]",
         cv * Results.JULIAN_YEAR_SECONDS,
         inflectionTime / 60,
         inflectionSettlement * 1e3,
@@ -123,6 +124,8 @@ public record InflectionPointResult(
         d0 * 1e3,
         d100 * 1e3,
         readingsUsed.size(),
+        windowHalfWidth,
+        windowCorrection,
         drainagePath * 1e3,
         warnings.stream().map(FitWarning::kind).toList());
   }

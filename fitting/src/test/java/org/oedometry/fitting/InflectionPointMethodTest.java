@@ -265,7 +265,14 @@ class InflectionPointMethodTest {
         .isCloseTo(r.inflectionTime(), within(1e-9 * r.inflectionTime()));
     assertThat(r.readingsUsed()).hasSizeGreaterThanOrEqualTo(7);
     assertThat(r.method()).isEqualTo(CvMethod.INFLECTION_POINT);
-    assertThat(r.toString()).startsWith("InflectionPointResult[cv 2.00");
+    assertThat(r.toString())
+        .startsWith("InflectionPointResult[cv 2.00")
+        .contains(
+            String.format(
+                java.util.Locale.ROOT,
+                "readings in window of +/-%.3g log cycle (correction %.3g cycle)",
+                r.windowHalfWidth(),
+                r.windowCorrection()));
   }
 
   @Test
