@@ -73,19 +73,19 @@ import org.oedometry.theory.Terzaghi;
  *       half-width whose windows all reach beyond it to hold the readings wanted gives the same fit
  *       as the narrower one and is not fitted again.
  *   <li><b>Window correction.</b> A local polynomial does not follow Terzaghi's curve exactly: its
- *       inflection lies off the curve's, by 0.003 cycle at &plusmn;0.4 cycle, 0.036 at &plusmn;0.8
- *       and 0.065 at &plusmn;1.0 (0.75 %, 8.6 % and 16 % in c<sub>v</sub>; measured on exact curves
- *       read 80 times a cycle). A least-squares fit is linear in the readings, so on the chosen
- *       window (its readings and centre fixed) Terzaghi's curve U(T<sub>I</sub> 10<sup>x -
- *       c*</sup>) with its inflection at c* is fitted in the same way, and c* is moved (secant
- *       iteration) until that fit's inflection falls where the readings' fit has its own. Then c*
- *       is the inflection of the Terzaghi curve d<sub>0</sub> + d<sub>p</sub> U that gives the
- *       readings' fit, exactly when the readings are such a curve; d<sub>p</sub> is the ratio of
- *       the two fits' slopes and d<sub>0</sub> the readings' fit less d<sub>p</sub> times the exact
- *       curve's fit, at the inflection. If the correction cannot be made (no inflection in the
- *       exact curve's fit, or no convergence in 20 moves), the next window in order is corrected.
- *       The correction (the fit's inflection minus c*) is reported ({@link
- *       InflectionPointResult#windowCorrection()}).
+ *       inflection lies off the curve's, by 0.0032 cycle at &plusmn;0.4 cycle, 0.036 at &plusmn;0.8
+ *       and 0.065 at &plusmn;1.0 (0.75 %, 8.6 % and 16 % in c<sub>v</sub>; exact curves read 80
+ *       times a cycle, the same in an independent numpy computation, see the tests). A
+ *       least-squares fit is linear in the readings, so on the chosen window (its readings and
+ *       centre fixed) Terzaghi's curve U(T<sub>I</sub> 10<sup>x - c*</sup>) with its inflection at
+ *       c* is fitted in the same way, and c* is moved (secant iteration) until that fit's
+ *       inflection falls where the readings' fit has its own. Then c* is the inflection of the
+ *       Terzaghi curve d<sub>0</sub> + d<sub>p</sub> U that gives the readings' fit, exactly when
+ *       the readings are such a curve; d<sub>p</sub> is the ratio of the two fits' slopes and
+ *       d<sub>0</sub> the readings' fit less d<sub>p</sub> times the exact curve's fit, at the
+ *       inflection. If the correction cannot be made (no inflection in the exact curve's fit, or no
+ *       convergence in 20 moves), the next window in order is corrected. The correction (the fit's
+ *       inflection minus c*) is reported ({@link InflectionPointResult#windowCorrection()}).
  *   <li>The slope at the inflection is 0.686845 d<sub>p</sub> per cycle, the settlement there
  *       d<sub>0</sub> + 0.700980 d<sub>p</sub>, and d<sub>100</sub> = d<sub>0</sub> +
  *       d<sub>p</sub>: exact for Terzaghi's curve; secondary compression steepens the curve at the
