@@ -154,6 +154,28 @@ class JShellScriptsTest {
     // Root-time with 1.15: lands at U = 89.68 % and c_v 1.51 % high [exact: FACTS.md]; the
     // interpolation between readings moves it a little: between 0 and +1.6 %.
     assertThat(number(out, "^root-time \\(Taylor\\)" + bias)).isBetween(0.0, 1.6);
+    // Inflection point: its window correction makes it exact on Terzaghi's own curve (its
+    // Javadoc; checked against numpy in InflectionPointMethodTest): 0.00 % without noise.
+    assertThat(number(out, "^inflection point" + bias)).isCloseTo(0.0, within(0.005));
+  }
+
+  @Test
+  @DisplayName(
+      "wild-reading.jsh: the reading the script knocked (index 200, t = 60 s x 201) is named, and"
+          + " only with the wild reading; both fits near the generator's 2 m^2/yr")
+  void wildReading() throws IOException {
+    String out = run("wild-reading.jsh");
+    String clean =
+        out.substring(out.indexOf("clean curve:"), out.indexOf("with the wild reading:"));
+    String wild = out.substring(out.indexOf("with the wild reading:"));
+    assertThat(clean).doesNotContain("OUTLYING_READING");
+    assertThat(wild)
+        .contains("OUTLYING_READING: 1 reading lies")
+        .contains("index 200 (t = " + String.format(Locale.ROOT, "%.4g", 60.0 * 201) + " s");
+    // The generator's c_v (invented data, set in the script): 2 m^2/yr; 1 um of noise on 1,440
+    // readings of a pure Terzaghi curve leaves the fit within 1 % of it.
+    assertThat(number(out, "clean curve: c_v ([0-9.]+)")).isCloseTo(2.0, within(0.02));
+    assertThat(number(out, "with the wild reading: c_v ([0-9.]+)")).isCloseTo(2.0, within(0.02));
   }
 
   @Test
