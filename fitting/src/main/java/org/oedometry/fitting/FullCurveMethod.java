@@ -82,8 +82,11 @@ import org.oedometry.theory.CurveParameters;
  * increment is flagged in 95 % of curves, on clean curves the warning appears in 2 to 4 %; the last
  * reading of a lab schedule, on which the secondary slope rests almost alone, is flagged only when
  * far off. {@link FitException}: the readings do not move, primary consolidation was over before
- * the first reading or is not seen at all (c<sub>v</sub> at the edge of the search), or the
- * optimiser failed from every start.
+ * the first reading or is not seen at all (c<sub>v</sub> at the edge of the search), the optimiser
+ * failed from every start, or c<sub>v</sub> is not determined: its interval covers every
+ * c<sub>v</sub> searched (T at the last reading from 10<sup>-4</sup> to 10<sup>7</sup>), or an end
+ * of it lies outside the normal double range (below 2.2 x 10<sup>-308</sup> m<sup>2</sup>/s, or
+ * above the largest value that is finite in m<sup>2</sup>/yr).
  *
  * <p>Deterministic (same readings, same bits) and thread-safe. Results feed engineering decisions
  * and must be reviewed by a qualified engineer; local codes and standards govern.
@@ -104,6 +107,12 @@ public final class FullCurveMethod {
   private static final double HIGHEST_END_FACTOR = 1e7;
 
   private static final int MAX_STARTS = 3;
+
+  /**
+   * Largest upper end of the c<sub>v</sub> interval, m<sup>2</sup>/s, that is still finite in
+   * m<sup>2</sup>/yr (the unit of the reports and of {@code toString}).
+   */
+  static final double LARGEST_REPORTED_CV = Double.MAX_VALUE / Results.JULIAN_YEAR_SECONDS;
 
   /** Above this many readings (after t = 0) the search runs on log-time groups of readings. */
   static final int GROUPING_LIMIT = 400;
@@ -411,9 +420,23 @@ public final class FullCurveMethod {
     double halfWidth = quantile * errors[2];
     double cvLow = Math.exp(logCv - halfWidth);
     double cvHigh = Math.exp(logCv + halfWidth);
-    if (!(cvLow > 0) || !Double.isFinite(cvHigh)) {
+    if (!(cvLow >= Double.MIN_NORMAL) || !(cvHigh <= LARGEST_REPORTED_CV)) {
       throw new FitException(
-          "c_v is not determined by these readings (its confidence interval is unbounded)");
+          Checks.format(
+              "c_v is not determined by these readings: its %.0f %% confidence interval runs"
+                  + " beyond the range of numbers (about 1e-308 to 1e300 m^2/s)",
+              100 * options.confidenceLevel()));
+    }
+    if (logCv - halfWidth <= lowestLogCv && logCv + halfWidth >= highestLogCv) {
+      throw new FitException(
+          Checks.format(
+              "c_v is not determined by these readings: its %.0f %% confidence interval, %s to %s"
+                  + " m^2/s, covers every c_v searched (T at the last reading from %s to %s)",
+              100 * options.confidenceLevel(),
+              cvLow,
+              cvHigh,
+              LOWEST_END_FACTOR,
+              HIGHEST_END_FACTOR));
     }
 
     // 4. Statistics, warnings and the plotted curve.

@@ -11,6 +11,7 @@ import java.util.SplittableRandom;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.theory.ConsolidationCurveModel;
 import org.oedometry.theory.CurveParameters;
 
 /** Invariances of the full-curve fit (QuickTheories, fixed seed). */
@@ -81,6 +82,53 @@ class FullCurveMethodProperties {
               assertThat(shifted.cv() / base.cv()).isCloseTo(1, within(1e-4));
               assertThat(base.cvLow()).isLessThanOrEqualTo(base.cv());
               assertThat(base.cvHigh()).isGreaterThanOrEqualTo(base.cv());
+            });
+  }
+
+  @Test
+  @DisplayName(
+      "A curve far from complete with one reading knocked far off: refused, or an interval that"
+          + " excludes part of the c_v searched and is finite in m^2/yr [Terzaghi's closed form as"
+          + " generator; the refusal rule of the class description]")
+  void undeterminedCvIsRefused() {
+    qt().withFixedSeed(SEED)
+        .withExamples(60)
+        .forAll(
+            doubles().between(-3, -1),
+            doubles().between(0.5, 2.5),
+            integers().between(20, 80),
+            longs().all())
+        .checkAssert(
+            (log10LastTimeFactor, log10Knock, readings, seed) -> {
+              SplittableRandom random = new SplittableRandom(seed);
+              boolean equalSteps = random.nextBoolean();
+              double[] t = new double[readings];
+              for (int i = 0; i < readings; i++) {
+                t[i] = equalSteps ? 60.0 * (i + 1) : 6.0 * Math.pow(1.1, i);
+              }
+              double h = FullCurveMethodTest.DRAINAGE_PATH;
+              double lastTime = t[readings - 1];
+              double cv = Math.pow(10, log10LastTimeFactor) * h * h / lastTime;
+              CurveParameters truth = CurveParameters.of(0.1e-3, 0.5e-3, cv, 0.01e-3);
+              double[] d = new double[readings];
+              for (int i = 0; i < readings; i++) {
+                d[i] = ConsolidationCurveModel.of(h).settlement(t[i], truth);
+              }
+              d[readings / 2] += 0.5e-3 * Math.pow(10, log10Knock);
+              FullCurveResult r;
+              try {
+                r = FullCurveMethod.fit(SettlementCurve.of(t, d), h);
+              } catch (FitException e) {
+                assertThat(e.getMessage()).isNotBlank();
+                return;
+              }
+              // The search runs over T at the last reading from 1e-4 to 1e7 (class description).
+              double slowest = 1e-4 * h * h / lastTime;
+              double fastest = 1e7 * h * h / lastTime;
+              assertThat(r.cvLow() > slowest || r.cvHigh() < fastest).as(r.toString()).isTrue();
+              assertThat(r.cvLow()).isGreaterThanOrEqualTo(Double.MIN_NORMAL);
+              assertThat(r.cvHigh() * FullCurveMethodTest.YEAR).isFinite();
+              assertThat(r.toString()).doesNotContain("Infinity");
             });
   }
 

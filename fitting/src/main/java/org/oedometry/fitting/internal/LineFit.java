@@ -8,7 +8,8 @@ package org.oedometry.fitting.internal;
  * @param intercept y at x = 0
  * @param centre mean abscissa of the points
  * @param valueAtCentre fitted y at the mean abscissa (the mean ordinate)
- * @param rootMeanSquare root-mean-square residual, units of y
+ * @param rootMeanSquare root-mean-square residual, units of y (finite for finite residuals: sums of
+ *     squares that overflow or underflow are taken on residuals scaled by the largest)
  * @param count number of points
  */
 public record LineFit(
@@ -18,6 +19,12 @@ public record LineFit(
     double valueAtCentre,
     double rootMeanSquare,
     int count) {
+
+  /**
+   * A sum of squared residuals below this (2<sup>-900</sup>) may have lost digits to underflow: the
+   * root-mean-square is then taken on residuals scaled by the largest.
+   */
+  private static final double SMALLEST_PLAIN_SQUARES = 0x1.0p-900;
 
   /**
    * Fits points from to to-1 of the arrays; with one point the line is horizontal through it; with
@@ -48,11 +55,24 @@ public record LineFit(
     }
     double slope = sxx > 0 ? sxy / sxx : 0.0;
     double ss = 0;
+    double largest = 0;
     for (int i = from; i < to; i++) {
       double r = y[i] - my - slope * (x[i] - mx);
       ss += r * r;
+      largest = Math.max(largest, Math.abs(r));
     }
-    return new LineFit(slope, my - slope * mx, mx, my, Math.sqrt(ss / n), n);
+    double rootMeanSquare = Math.sqrt(ss / n);
+    if (largest > 0 && (ss == Double.POSITIVE_INFINITY || ss < SMALLEST_PLAIN_SQUARES)) {
+      // Squares beyond the double range (residuals above about 1e154 or below 1e-154 of the
+      // unit): the same sum divided by the largest residual squared, then scaled back.
+      double scaled = 0;
+      for (int i = from; i < to; i++) {
+        double r = (y[i] - my - slope * (x[i] - mx)) / largest;
+        scaled += r * r;
+      }
+      rootMeanSquare = largest * Math.sqrt(scaled / n);
+    }
+    return new LineFit(slope, my - slope * mx, mx, my, rootMeanSquare, n);
   }
 
   /**
