@@ -83,10 +83,13 @@ import org.oedometry.theory.CurveParameters;
  * reading of a lab schedule, on which the secondary slope rests almost alone, is flagged only when
  * far off. {@link FitException}: the readings do not move, primary consolidation was over before
  * the first reading or is not seen at all (c<sub>v</sub> at the edge of the search), the optimiser
- * failed from every start, or c<sub>v</sub> is not determined: its interval covers every
- * c<sub>v</sub> searched (T at the last reading from 10<sup>-4</sup> to 10<sup>7</sup>), or an end
- * of it lies outside the normal double range (below 2.2 x 10<sup>-308</sup> m<sup>2</sup>/s, or
- * above the largest value that is finite in m<sup>2</sup>/yr).
+ * failed from every start (the message adds that primary consolidation seems far from complete
+ * where the best start puts T at the last reading below 0.2: such readings follow U = 2 &radic;(T/
+ * &pi;) and fix only d<sub>p</sub> &radic;c<sub>v</sub>), or c<sub>v</sub> is not determined: its
+ * interval covers every c<sub>v</sub> searched (T at the last reading from 10<sup>-4</sup> to
+ * 10<sup>7</sup>), or an end of it lies outside the normal double range (below 2.2 x
+ * 10<sup>-308</sup> m<sup>2</sup>/s, or above the largest value that is finite in
+ * m<sup>2</sup>/yr).
  *
  * <p>Deterministic (same readings, same bits) and thread-safe. Results feed engineering decisions
  * and must be reviewed by a qualified engineer; local codes and standards govern.
@@ -107,6 +110,14 @@ public final class FullCurveMethod {
   private static final double HIGHEST_END_FACTOR = 1e7;
 
   private static final int MAX_STARTS = 3;
+
+  /**
+   * T at the last reading below which the early-time form U = 2 &radic;(T/&pi;) holds to within
+   * 0.11 % (4 x 10<sup>-6</sup> at T = 0.1, 10<sup>-23</sup> at T = 0.02; Terzaghi's series,
+   * checked with mpmath): readings that end there fix little more than d<sub>p</sub>
+   * &radic;c<sub>v</sub>. Used only to explain a failed fit.
+   */
+  static final double EARLY_TIME_END_FACTOR = 0.2;
 
   /**
    * Largest upper end of the c<sub>v</sub> interval, m<sup>2</sup>/s, that is still finite in
@@ -350,8 +361,21 @@ public final class FullCurveMethod {
       }
     }
     if (best == null) {
+      // T at the last reading for the lowest point of the profile: far below 1, the readings
+      // follow U = 2 sqrt(T / pi) and fix only d_p sqrt(c_v), and Levenberg-Marquardt wanders
+      // along that valley.
+      double bestStartEndFactor =
+          Math.exp(profileLogCv[startIndices.get(0)]) * lastTime / pathSquared;
+      String hint =
+          bestStartEndFactor < EARLY_TIME_END_FACTOR
+              ? Checks.format(
+                  " (the best start puts T at the last reading at %.2g: primary consolidation"
+                      + " seems far from complete, and such readings fix only d_p sqrt(c_v), not"
+                      + " c_v)",
+                  bestStartEndFactor)
+              : "";
       throw new FitException(
-          "the least-squares fit failed from every start: " + lastFailure.getMessage(),
+          "the least-squares fit failed from every start: " + lastFailure.getMessage() + hint,
           lastFailure);
     }
     int iterations = best.iterations();

@@ -489,6 +489,25 @@ class FullCurveMethodTest {
   }
 
   @Test
+  @DisplayName(
+      "Exact curves stopped early (T at the last reading 0.01 to 0.1, U below 36 %): refused, and"
+          + " the message says why [Terzaghi's early-time form U = 2 sqrt(T / pi), textbook, from"
+          + " memory: the readings fix d_p sqrt(c_v), not c_v]")
+  void curveStoppedEarlyIsRefusedWithTheReason() {
+    double[] t = labSchedule();
+    double lastTime = t[t.length - 1];
+    for (double lastTimeFactor : new double[] {0.01, 0.03, 0.1}) {
+      double cv = lastTimeFactor * DRAINAGE_PATH * DRAINAGE_PATH / lastTime;
+      SettlementCurve early = curve(t, CurveParameters.of(0.02e-3, 0.5e-3, cv, 0.01e-3), 0, null);
+      assertThatThrownBy(() -> FullCurveMethod.fit(early, DRAINAGE_PATH))
+          .as("T at the last reading %s", lastTimeFactor)
+          .isInstanceOf(FitException.class)
+          .hasMessageContaining("primary consolidation seems far from complete")
+          .hasMessageContaining("fix only d_p sqrt(c_v), not c_v");
+    }
+  }
+
+  @Test
   void rejectsBadInput() {
     SettlementCurve few =
         SettlementCurve.of(
