@@ -82,14 +82,15 @@ import org.oedometry.theory.CurveParameters;
  * increment is flagged in 95 % of curves, on clean curves the warning appears in 2 to 4 %; the last
  * reading of a lab schedule, on which the secondary slope rests almost alone, is flagged only when
  * far off. {@link FitException}: the readings do not move, primary consolidation was over before
- * the first reading or is not seen at all (c<sub>v</sub> at the edge of the search), the optimiser
- * failed from every start (the message adds that primary consolidation seems far from complete
- * where the best start puts T at the last reading below 0.2: such readings follow U = 2 &radic;(T/
- * &pi;) and fix only d<sub>p</sub> &radic;c<sub>v</sub>), or c<sub>v</sub> is not determined: its
- * interval covers every c<sub>v</sub> searched (T at the last reading from 10<sup>-4</sup> to
- * 10<sup>7</sup>), or an end of it lies outside the normal double range (below 2.2 x
- * 10<sup>-308</sup> m<sup>2</sup>/s, or above the largest value that is finite in
- * m<sup>2</sup>/yr).
+ * the first reading or is not seen at all (c<sub>v</sub> at the edge of the search), the c<sub>v
+ * </sub> searched (T at the last reading 10<sup>-4</sup> to 10<sup>7</sup>) is not a finite
+ * positive double for this drainage path and these times (H<sub>dr</sub><sup>2</sup> beyond the
+ * range of doubles), the optimiser failed from every start (the message adds that primary
+ * consolidation seems far from complete where the best start puts T at the last reading below 0.2:
+ * such readings follow U = 2 &radic;(T/&pi;) and fix only d<sub>p</sub> &radic;c<sub>v</sub>), or
+ * c<sub>v</sub> is not determined: its interval covers every c<sub>v</sub> searched, or an end of
+ * it lies outside the normal double range (below 2.2 x 10<sup>-308</sup> m<sup>2</sup>/s, or above
+ * the largest value that is finite in m<sup>2</sup>/yr).
  *
  * <p>Deterministic (same readings, same bits) and thread-safe. Results feed engineering decisions
  * and must be reviewed by a qualified engineer; local codes and standards govern.
@@ -250,6 +251,13 @@ public final class FullCurveMethod {
     final double lastTime = t[n - 1];
     final double lowestLogCv = Math.log(LOWEST_END_FACTOR * pathSquared / lastTime);
     final double highestLogCv = Math.log(HIGHEST_END_FACTOR * pathSquared / lastTime);
+    if (!(Math.exp(lowestLogCv) > 0) || !(Math.exp(highestLogCv) < Double.POSITIVE_INFINITY)) {
+      throw new FitException(
+          Checks.format(
+              "the c_v searched (T at the last reading %s to %s, with H_dr = %s m and the last"
+                  + " reading at %s s) lies outside the range of double-precision numbers",
+              LOWEST_END_FACTOR, HIGHEST_END_FACTOR, drainagePathMetres, lastTime));
+    }
 
     // 1. Many readings are grouped into log-time bins for the search (start values, profile and
     // the multi-start Levenberg-Marquardt); the fit is then finished on every reading.
@@ -495,13 +503,19 @@ public final class FullCurveMethod {
               FitWarning.Kind.PARAMETER_AT_BOUND,
               "the secondary slope is at its bound 0: no secondary compression is seen"));
     }
-    if (cvHigh / cvLow > 2) {
+    double spread = cvHigh / cvLow;
+    if (spread > 2) {
+      // The two ends are finite, their ratio may not be (an interval over 308 decades wide).
+      String factor =
+          spread < Double.POSITIVE_INFINITY
+              ? Checks.format("%.3g", spread)
+              : Checks.format("more than %.3g", Double.MAX_VALUE);
       warnings.add(
           new FitWarning(
               FitWarning.Kind.WIDE_INTERVAL,
               Checks.format(
-                  "the %.0f %% interval of c_v spans a factor of %.3g (%.4g to %.4g m^2/s)",
-                  100 * options.confidenceLevel(), cvHigh / cvLow, cvLow, cvHigh)));
+                  "the %.0f %% interval of c_v spans a factor of %s (%.4g to %.4g m^2/s)",
+                  100 * options.confidenceLevel(), factor, cvLow, cvHigh)));
     }
     double runsZ = runsTestZ(residuals);
     if (runsZ < RUNS_TEST_CRITICAL_Z) {
@@ -616,19 +630,35 @@ public final class FullCurveMethod {
   private static final int OUTLIER_END_READINGS = 10;
 
   /**
+   * Step of the grid of log<sub>10</sub> t on which the screen bounds the leverage (cycles): the
+   * model's gradient changes by a small fraction over it.
+   */
+  static final double OUTLIER_LEVERAGE_STEP = 0.01;
+
+  /** Weighted leverage that may be exceeded only by readings examined on many readings. */
+  static final double OUTLIER_LEVERAGE_SCREEN = 0.1;
+
+  /**
    * Readings whose externally studentized residual ({@link #studentizedResiduals}) exceeds the
    * Bonferroni bound: Student's t quantile at 1 - {@value #OUTLIER_FAMILY_PROBABILITY}/(2n) for n -
    * p - 1 degrees of freedom (Cook &amp; Weisberg 1982, Residuals and Influence in Regression, ch.
    * 2: the Bonferroni outlier test). Above {@link #GROUPING_LIMIT} readings only these are
    * examined: the first and last ten, those whose weight exceeds {@value #OUTLIER_HEAVY_WEIGHT}
-   * times the mean (isolated on log time, so of high leverage), and those whose residual exceeds
-   * {@value #OUTLIER_SCREEN} of the bound times &sigma;&#770;. The others cannot reach the bound
-   * unless c<sub>i</sub> (&sigma;<sub>(i)</sub>/&sigma;&#770;)<sup>2</sup> &lt; 0.64, while inside
-   * a logger increment c<sub>i</sub> was measured at 0.97 to 1.03 (864 to 86,400 readings); the
-   * test checks that the screen changes nothing on such increments.
+   * times the mean, those whose weighted leverage h<sub>ii</sub> = w<sub>i</sub> J<sub>i</sub>
+   * A<sup>-1</sup>J<sub>i</sub><sup>T</sup> may exceed {@value #OUTLIER_LEVERAGE_SCREEN} (J
+   * A<sup>-1</sup>J<sup>T</sup> taken as twice the larger of its values at the ends of the step of
+   * a grid of {@value #OUTLIER_LEVERAGE_STEP} log cycle that holds the reading; the leverages sum
+   * to p, so few readings qualify: those alone on a stretch of log time that fixes a parameter),
+   * and those whose residual exceeds {@value #OUTLIER_SCREEN} of the bound times &sigma;&#770;. Any
+   * other reading has c<sub>i</sub> &ge; 1 - 2h<sub>ii</sub> &ge; 0.8, and reaches the bound only
+   * if c<sub>i</sub> (&sigma;<sub>(i)</sub>/&sigma;&#770;)<sup>2</sup> &lt; 0.64, that is if
+   * leaving it out removes a fifth of the residual variance, which takes |r<sub>i</sub>| &gt; 0.4
+   * &radic;(n - p) &sigma;&#770; &ge; 8 &sigma;&#770;: beyond the screen. Where the grid would have
+   * as many nodes as half the readings, every reading is examined. The test checks that the screen
+   * changes nothing on logger increments and on increments with few readings in a gap.
    *
    * @param sumSquares &Sigma; r<sup>2</sup> of the residuals
-   * @return {index, t} of each outlying reading, in time order
+   * @return {index, studentized residual} of each outlying reading, in time order
    */
   static List<double[]> outlyingReadings(
       double[] t,
@@ -647,20 +677,54 @@ public final class FullCurveMethod {
     }
     double bound =
         studentQuantile(1 - OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - parameterCount - 1);
-    double screen =
-        n > GROUPING_LIMIT
-            ? OUTLIER_SCREEN * bound * Math.sqrt(studentized.noiseVariance)
-            : Double.NEGATIVE_INFINITY;
+    // Every reading is examined (the screen at minus infinity) up to GROUPING_LIMIT readings, and
+    // where the leverage grid would cost as much.
+    double screen = Double.NEGATIVE_INFINITY;
+    double[] nodeTimes = null;
+    double[] nodeFactors = null;
+    if (n > GROUPING_LIMIT) {
+      double low = Math.log10(t[0]);
+      double steps = Math.max(1, Math.ceil((Math.log10(t[n - 1]) - low) / OUTLIER_LEVERAGE_STEP));
+      if (steps < n / 2) {
+        screen = OUTLIER_SCREEN * bound * Math.sqrt(studentized.noiseVariance);
+        int last = (int) steps;
+        nodeTimes = new double[last + 1];
+        nodeFactors = new double[last + 1];
+        // Node times by a product of steps (within a few hundred ulp of 10^(low + k step): they
+        // only
+        // place the grid).
+        double ratio = Math.pow(10, OUTLIER_LEVERAGE_STEP);
+        double time = t[0];
+        for (int k = 0; k <= last; k++) {
+          nodeTimes[k] = k == last ? t[n - 1] : time;
+          nodeFactors[k] = studentized.leverageFactor(nodeTimes[k]);
+          time *= ratio;
+        }
+      }
+    }
     int ends = Math.min(OUTLIER_END_READINGS, n);
     int inside = Math.max(ends, n - ends);
     for (int i = 0; i < ends; i++) {
       addIfOutlying(found, i, studentized.at(i), bound);
     }
-    // Inside the increment only the readings that pass the screen (every reading when n is at most
-    // GROUPING_LIMIT: the screen is minus infinity there).
-    for (int i = ends; i < inside; i++) {
-      if (Math.abs(residuals[i]) > screen || weights[i] > OUTLIER_HEAVY_WEIGHT) {
+    // Inside the increment only the readings that pass the screen, node interval by node interval
+    // (a reading at a node's time belongs to the interval that ends there).
+    if (nodeTimes == null) {
+      for (int i = ends; i < inside; i++) {
         addIfOutlying(found, i, studentized.at(i), bound);
+      }
+    } else {
+      int i = ends;
+      for (int node = 0; node + 1 < nodeTimes.length; node++) {
+        double factor = 2 * Math.max(nodeFactors[node], nodeFactors[node + 1]);
+        boolean lastInterval = node + 2 == nodeTimes.length;
+        for (; i < inside && (lastInterval || t[i] <= nodeTimes[node + 1]); i++) {
+          if (Math.abs(residuals[i]) > screen
+              || weights[i] > OUTLIER_HEAVY_WEIGHT
+              || !(weights[i] * factor <= OUTLIER_LEVERAGE_SCREEN)) {
+            addIfOutlying(found, i, studentized.at(i), bound);
+          }
+        }
       }
     }
     for (int i = inside; i < n; i++) {
@@ -764,6 +828,24 @@ public final class FullCurveMethod {
       }
       return new Studentized(
           t, residuals, weights, curve, solution, parameterCount, noiseVariance, weightedVariance);
+    }
+
+    /**
+     * J A<sup>-1</sup>J<sup>T</sup> at a time (J the model's gradient there): the weighted leverage
+     * a reading of weight 1 would have there.
+     */
+    double leverageFactor(double seconds) {
+      curve.settlementAndGradient(seconds, gradient);
+      double q = 0;
+      for (int j = 0; j < parameterCount; j++) {
+        double[] row = covariance[j];
+        double sum = 0;
+        for (int k = 0; k < parameterCount; k++) {
+          sum += row[k] * gradient[k];
+        }
+        q += gradient[j] * sum;
+      }
+      return q / weightedVariance;
     }
 
     /** t<sub>i</sub>, or 0 where c<sub>i</sub> or &sigma;<sub>(i)</sub> is not positive. */

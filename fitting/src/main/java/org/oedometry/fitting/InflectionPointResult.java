@@ -16,7 +16,8 @@ import org.oedometry.fitting.internal.Checks;
  * @param cv c<sub>v</sub> = T<sub>I</sub> H<sub>dr</sub><sup>2</sup> / t<sub>I</sub>,
  *     m<sup>2</sup>/s
  * @param inflectionTime t<sub>I</sub>, the time of the steepest slope on log t, s
- * @param inflectionSettlement settlement of the local fit at t<sub>I</sub>, m
+ * @param inflectionSettlement settlement at t<sub>I</sub> of the Terzaghi curve that gives the
+ *     local fit, d<sub>0</sub> + U<sub>I</sub> (d<sub>100</sub> - d<sub>0</sub>), m
  * @param slopePerLogCycle slope of the curve at the inflection, m per log<sub>10</sub> cycle of
  *     time
  * @param d0 start of primary consolidation implied by the slope, d<sub>I</sub> - U<sub>I</sub>
@@ -26,7 +27,8 @@ import org.oedometry.fitting.internal.Checks;
  * @param windowHalfWidth half-width of the final local window, log<sub>10</sub> cycles
  * @param windowCorrection how far the final window's fit placed the inflection from where the same
  *     fit places it on Terzaghi's exact curve, log<sub>10</sub> cycles: subtracted from the fit's
- *     inflection to give {@link #inflectionTime()} (0 when the inflection came from a spline)
+ *     inflection to give {@link #inflectionTime()} (the spline of sparse readings gives only the
+ *     first guess: every result is corrected)
  * @param inflectionPoint the inflection in plot coordinates
  * @param tangentLine the tangent at the inflection, from its crossing of d<sub>0</sub> to its
  *     crossing of d<sub>100</sub> (two points)

@@ -529,4 +529,59 @@ class FullCurveMethodTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("drainage path (NaN m) must be finite and > 0");
   }
+
+  @Test
+  @DisplayName(
+      "6 readings (30 min to 24 h) of an exact curve (ConsolidationCurveModel, c_v 20 H_dr^2 / 24"
+          + " h) with the second reading 1 m off: the c_v interval runs over some 400 decades and"
+          + " covers every c_v searched: refused, with a message that quotes no infinity"
+          + " (ARCHITECTURE.md: no NaN or infinity leaves the library; the class description's"
+          + " refusal rule)")
+  void intervalOverEveryCvSearchedIsRefused() {
+    double[] t = {1800, 3600, 7200, 14400, 28800, 86400};
+    double cv = 20 * DRAINAGE_PATH * DRAINAGE_PATH / 86_400;
+    ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
+    CurveParameters truth = CurveParameters.of(0, 1e-3, cv, 1e-5);
+    double[] d = new double[t.length];
+    for (int i = 0; i < t.length; i++) {
+      d[i] = model.settlement(t[i], truth);
+    }
+    d[1] = 1.0;
+    assertThatThrownBy(() -> FullCurveMethod.fit(SettlementCurve.of(t, d), DRAINAGE_PATH))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("c_v is not determined by these readings")
+        .hasMessageContaining("covers every c_v searched")
+        .hasMessageNotContaining("Infinity")
+        .hasMessageNotContaining("NaN");
+  }
+
+  @Test
+  @DisplayName(
+      "Drainage path at the ends of the double range (lab curve from ConsolidationCurveModel):"
+          + " H_dr = 1e150 m gives c_v scaled by (H_dr / 9.5 mm)^2 to 1e-9 (T = c_v t / H_dr^2,"
+          + " Terzaghi); H_dr = 1e160 m and 1e-160 m, where H_dr^2 leaves the range of doubles, a"
+          + " FitException, no longer the theory module's IllegalArgumentException 'cv (Infinity"
+          + " m^2/s)' from inside the fit")
+  void drainagePathAtTheEndsOfTheDoubleRange() {
+    double cv = 20 * DRAINAGE_PATH * DRAINAGE_PATH / 86_400;
+    ConsolidationCurveModel model = ConsolidationCurveModel.of(DRAINAGE_PATH);
+    CurveParameters truth = CurveParameters.of(0, 1e-3, cv, 1e-5);
+    double[] t = labSchedule();
+    double[] d = new double[t.length];
+    for (int i = 0; i < t.length; i++) {
+      d[i] = model.settlement(t[i], truth);
+    }
+    SettlementCurve curve = SettlementCurve.of(t, d);
+    double reference = FullCurveMethod.fit(curve, DRAINAGE_PATH).cv();
+    double scale = 1e150 / DRAINAGE_PATH;
+    assertThat(FullCurveMethod.fit(curve, 1e150).cv() / (reference * scale * scale))
+        .isCloseTo(1, within(1e-9));
+    for (double path : new double[] {1e160, 1e-160}) {
+      assertThatThrownBy(() -> FullCurveMethod.fit(curve, path))
+          .as("H_dr %s m", path)
+          .isInstanceOf(FitException.class)
+          .hasMessageContaining("outside the range of double-precision numbers")
+          .hasMessageNotContaining("Infinity");
+    }
+  }
 }

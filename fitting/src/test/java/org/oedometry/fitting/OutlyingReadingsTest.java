@@ -3,6 +3,7 @@ package org.oedometry.fitting;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.SplittableRandom;
@@ -167,7 +168,7 @@ class OutlyingReadingsTest {
               1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
       double[] every =
           FullCurveMethod.studentizedResiduals(t, residuals, w, f.curve(), f.solution(), 4);
-      List<Integer> expected = new java.util.ArrayList<>();
+      List<Integer> expected = new ArrayList<>();
       for (int i = 0; i < n; i++) {
         if (Math.abs(every[i]) > bound) {
           expected.add(i);
@@ -182,6 +183,69 @@ class OutlyingReadingsTest {
       assertThat(screened).as("trial %d (%d readings)", trial, n).isEqualTo(expected);
       assertThat(expected).as("trial %d finds the wild readings", trial).isNotEmpty();
     }
+  }
+
+  @Test
+  @DisplayName(
+      "Above 400 readings with a gap (300 readings from 1 to 10 s, 1 to 5 readings alone between"
+          + " 300 s and 9,000 s, 300 from 20,000 to 80,000 s; 1 um noise, one of the lone readings"
+          + " 3 to 30 um off), log-time and unit weights: the screen finds exactly what the"
+          + " Bonferroni test on every reading finds (Cook & Weisberg 1982, ch. 2); a lone reading"
+          + " of high leverage, small residual and weight below 100 was missed before")
+  void screenChangesNothingAcrossAGap() {
+    SplittableRandom random = new SplittableRandom(11);
+    int found = 0;
+    for (FullCurveOptions.ReadingWeights kind : FullCurveOptions.ReadingWeights.values()) {
+      for (int lone : new int[] {1, 2, 3, 5}) {
+        for (int trial = 0; trial < 20; trial++) {
+          int n = 600 + lone;
+          double[] t = new double[n];
+          for (int i = 0; i < 300; i++) {
+            t[i] = 1 + 9.0 * i / 300;
+            t[300 + lone + i] = 2e4 + 6e4 * i / 299.0;
+          }
+          for (int k = 0; k < lone; k++) {
+            t[300 + k] = 300 * Math.pow(30, (k + 0.5 + 0.3 * random.nextDouble()) / lone);
+          }
+          double[] y = ExactCurves.curve(t, TRUTH).settlementMetres();
+          for (int i = 0; i < n; i++) {
+            y[i] += 1e-6 * random.nextGaussian();
+          }
+          int wild = 300 + random.nextInt(lone);
+          y[wild] += (random.nextBoolean() ? 1 : -1) * random.nextDouble(3e-6, 30e-6);
+          double[] w = FullCurveMethod.weights(t, kind);
+          Fitted f = fit(t, y, w);
+          double[] residuals = f.solution().residuals();
+          double sumSquares = 0;
+          for (double r : residuals) {
+            sumSquares += r * r;
+          }
+          double bound =
+              FullCurveMethod.studentQuantile(
+                  1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
+          double[] every =
+              FullCurveMethod.studentizedResiduals(t, residuals, w, f.curve(), f.solution(), 4);
+          List<Integer> expected = new ArrayList<>();
+          for (int i = 0; i < n; i++) {
+            if (Math.abs(every[i]) > bound) {
+              expected.add(i);
+            }
+          }
+          List<Integer> screened =
+              FullCurveMethod.outlyingReadings(
+                      t, residuals, sumSquares, w, f.curve(), f.solution(), 4)
+                  .stream()
+                  .map(row -> (int) row[0])
+                  .toList();
+          assertThat(screened)
+              .as("%s weights, %d lone readings, trial %d", kind, lone, trial)
+              .isEqualTo(expected);
+          found += expected.contains(wild) ? 1 : 0;
+        }
+      }
+    }
+    // The wild lone reading is found in most trials (the rest are within the noise's reach).
+    assertThat(found).isGreaterThan(80);
   }
 
   @Test
