@@ -46,9 +46,9 @@ public record FitWarning(Kind kind, String message) {
     /**
      * A reading lies further from the fitted curve than the noise of the others allows (a wild
      * reading: a misread dial, a knock, a reading taken after the next load): check it; it pulls
-     * the fit. With only one or two readings more than parameters, a wild reading can drag the
-     * fit so far that a clean neighbour is named too (the residual variance has one or two degrees
-     * of freedom): check the named readings together.
+     * the fit. With only one or two readings more than parameters, a wild reading can drag the fit
+     * so far that a clean neighbour is named too (the residual variance has one or two degrees of
+     * freedom): check the named readings together.
      */
     OUTLYING_READING,
     /** Fewer than half the least-squares starts reached the best fit. */
