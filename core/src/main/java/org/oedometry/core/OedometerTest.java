@@ -20,7 +20,7 @@ import org.oedometry.theory.Drainage;
  *
  * <p><b>Checks.</b> At least one increment; the stress before each increment equals the stress
  * after the previous one (to a relative 1e-9); the specimen height stays above the height of solids
- * at every reading (void ratio &gt; 0).
+ * at the start and at every reading (void ratio &gt; 0).
  *
  * <p><b>Defaults.</b> Double drainage ({@link Drainage#DOUBLE}), drainage path from the height at
  * 50 % consolidation ({@link DrainagePathRule#HEIGHT_AT_HALF_CONSOLIDATION}), empty identifiers.
@@ -84,6 +84,13 @@ public final class OedometerTest {
         specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
             ? specimen.heightOfSolidsFromDryMass().getAsDouble()
             : finalHeight / (1 + specimen.finalVoidRatioFromWaterContent().getAsDouble());
+    if (!(startHeights[0] > heightOfSolids)) {
+      throw new IllegalArgumentException(
+          Checks.format(
+              "initial specimen height (%s m) is not above the height of solids (%s m) from the"
+                  + " final water content: initial void ratio would be <= 0",
+              Checks.number(startHeights[0]), Checks.number(heightOfSolids)));
+    }
     for (int i = 0; i < increments.size(); i++) {
       SettlementCurve c = increments.get(i).curve();
       for (int j = 0; j < c.size(); j++) {

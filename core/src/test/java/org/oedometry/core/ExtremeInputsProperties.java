@@ -28,6 +28,7 @@ import org.oedometry.core.compressibility.IncrementPermeability;
 import org.oedometry.core.compressibility.PachecoSilvaMethod;
 import org.oedometry.core.compressibility.Permeability;
 import org.oedometry.core.compressibility.PermeabilityChangeIndex;
+import org.oedometry.core.compressibility.PreconsolidationOptions;
 import org.oedometry.core.compressibility.SecondaryCompression;
 import org.oedometry.core.compressibility.SpecimenPhases;
 import org.oedometry.core.compressibility.WorkMethod;
@@ -54,6 +55,9 @@ import org.quicktheories.generators.Generate;
  * <p>For each call: a result whose every number, walked through all its public accessors (nested
  * records, lists, optionals), is finite, or an IllegalArgumentException with a message that does
  * not quote NaN or infinity (every input is finite, so such a value was made inside the library).
+ * Calls whose Javadoc allows no exception on valid input (the preconsolidation constructions, the
+ * virgin line and the branches, which say why a value is absent instead) must return a finite
+ * result.
  */
 class ExtremeInputsProperties {
 
@@ -331,11 +335,27 @@ class ExtremeInputsProperties {
     assertThat(notFinite(result)).as("%s on %s", call, input).isEmpty();
   }
 
+  /**
+   * A call whose documented contract allows no exception on valid input (the package documentation:
+   * "where a quantity cannot be derived from valid input, the result says why instead of
+   * throwing"): a finite result.
+   */
+  private static void finiteNeverThrows(Object input, String call, Supplier<Object> supplier) {
+    Object result;
+    try {
+      result = supplier.get();
+    } catch (IllegalArgumentException e) {
+      throw new AssertionError(call + " on " + input + " threw on valid input: " + e, e);
+    }
+    assertThat(notFinite(result)).as("%s on %s", call, input).isEmpty();
+  }
+
   @Test
   @DisplayName(
       "Compression curve, per-increment compressibility, C_c / C_r fits and the four"
           + " preconsolidation constructions on extreme stresses and void ratios: finite or a clean"
-          + " IllegalArgumentException")
+          + " IllegalArgumentException where documented; virgin line, branches and the"
+          + " constructions never throw")
   void compressionCurveEntryPoints() {
     qt().withFixedSeed(20261223L)
         .withExamples(400)
@@ -367,8 +387,9 @@ class ExtremeInputsProperties {
                           Double.MAX_VALUE,
                           stresses[0] * Math.pow(10, -1 + 3 * random.nextDouble()));
               finiteOrClean(c, "increments", () -> Compressibility.increments(curve, pressure));
-              finiteOrClean(c, "virginLine", () -> CompressionIndex.virginLine(curve, pressure));
-              finiteOrClean(c, "branches", () -> CompressionIndex.branches(curve, pressure));
+              finiteNeverThrows(
+                  c, "virginLine", () -> CompressionIndex.virginLine(curve, pressure));
+              finiteNeverThrows(c, "branches", () -> CompressionIndex.branches(curve, pressure));
               int[] fromStress =
                   java.util.stream.IntStream.range(0, curve.size())
                       .filter(j -> curve.startStress(j) > 0)
@@ -382,11 +403,18 @@ class ExtremeInputsProperties {
                 finiteOrClean(
                     c, "ofPoints", () -> CompressionIndex.ofPoints(e[0], rising[0], rising[1]));
               }
-              finiteOrClean(c, "Casagrande", () -> CasagrandeMethod.estimate(curve));
-              finiteOrClean(c, "Pacheco Silva", () -> PachecoSilvaMethod.estimate(curve));
-              finiteOrClean(c, "work", () -> WorkMethod.estimate(curve));
-              finiteOrClean(c, "Butterfield", () -> BilinearVolumeMethod.butterfield(curve));
-              finiteOrClean(c, "Onitsuka", () -> BilinearVolumeMethod.onitsuka(curve));
+              PreconsolidationOptions twoPoints = new PreconsolidationOptions(2);
+              finiteNeverThrows(c, "Casagrande", () -> CasagrandeMethod.estimate(curve));
+              finiteNeverThrows(
+                  c, "Casagrande, 2 points", () -> CasagrandeMethod.estimate(curve, twoPoints));
+              finiteNeverThrows(c, "Pacheco Silva", () -> PachecoSilvaMethod.estimate(curve));
+              finiteNeverThrows(
+                  c,
+                  "Pacheco Silva, 2 points",
+                  () -> PachecoSilvaMethod.estimate(curve, twoPoints));
+              finiteNeverThrows(c, "work", () -> WorkMethod.estimate(curve));
+              finiteNeverThrows(c, "Butterfield", () -> BilinearVolumeMethod.butterfield(curve));
+              finiteNeverThrows(c, "Onitsuka", () -> BilinearVolumeMethod.onitsuka(curve));
             });
   }
 

@@ -138,6 +138,32 @@ class OedometerTestTest {
   }
 
   @Test
+  @DisplayName(
+      "final-water-content basis with every reading swelling: H_s above H_0 (e0 < 0) is refused,"
+          + " as the class Javadoc promises void ratio > 0 (worked by hand, invented numbers)")
+  void initialHeightBelowTheSolids() {
+    // By hand (FACTS: e = w G_s saturated, e = H / H_s - 1): w_f = 0.10, G_s = 2.70, e_f = 0.27;
+    // readings start after load (t = 60 s) and swell to -6 mm, so H_f = 26 mm and
+    // H_s = 26 / 1.27 = 20.472 mm, above H_0 = 20 mm: e0 = 20 / 20.472 - 1 = -0.023 < 0.
+    Specimen swelling =
+        Specimen.builder()
+            .initialHeight(0.020)
+            .diameter(0.075)
+            .specificGravity(2.70)
+            .finalWaterContent(0.10)
+            .build();
+    List<LoadIncrement> increments =
+        List.of(
+            LoadIncrement.of(
+                0, 10e3, SettlementCurve.of(new double[] {60, 120}, new double[] {-5e-3, -6e-3})));
+    assertThatThrownBy(() -> OedometerTest.of(swelling, increments))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageStartingWith(
+            "initial specimen height (0.02 m) is not above the height of solids")
+        .hasMessageEndingWith("initial void ratio would be <= 0");
+  }
+
+  @Test
   @DisplayName("value semantics, toBuilder and a concise toString")
   void valueSemantics() {
     OedometerTest a = example();

@@ -38,6 +38,7 @@ import java.util.Locale;
  * between corner and curve and s<sub>b</sub> the bisector's slope: a property of Casagrande's
  * construction, not of the numerics. Absent when the envelope is too short, the curve shows no
  * downward break (a slope change below 10<sup>&minus;6</sup> per log cycle counts as none), the
+ * virgin-line points admit no straight line (stresses a few ulps apart have equal logarithms), the
  * virgin line does not fall, or the bisector does not meet the virgin line. Reference: {@link
  * PreconsolidationMethod#CASAGRANDE}. Results feed engineering decisions: they must be reviewed by
  * a qualified engineer, and local codes and standards govern. Stateless and thread-safe.
@@ -131,7 +132,17 @@ public final class CasagrandeMethod {
     double tangentSlope = fit.slope(xm);
     double bisectorSlope = Math.tan(0.5 * Math.atan(tangentSlope));
     points.add(new ConstructionPoint("maximum curvature", xm, em));
-    LineFit virgin = env.virginLine(options.virginLinePoints());
+    LineFit virgin;
+    try {
+      virgin = env.virginLine(options.virginLinePoints());
+    } catch (IllegalArgumentException noLine) {
+      return absent(
+          "the virgin-line points admit no straight line: " + noLine.getMessage(),
+          points,
+          List.of(),
+          used,
+          warnings);
+    }
     LoadingEnvelope.lineWarnings("the virgin line", virgin, warnings);
     double half = 0.25 * (x[n - 1] - x[0]);
     List<ConstructionLine> lines = new ArrayList<>();

@@ -29,7 +29,9 @@ public final class CompressionIndex {
    *
    * @param curve the compression curve
    * @param preconsolidationPressure &sigma;'<sub>p</sub>, Pa; finite, &gt; 0
-   * @return the fit, or absent with the reason (no normally consolidated increment)
+   * @return the fit, or absent with the reason (no normally consolidated increment, or its points
+   *     admit no straight line: stresses so close that their logarithms are equal, or a slope
+   *     beyond the double range)
    * @throws IllegalArgumentException if the curve is null or the pressure is not finite and
    *     positive
    */
@@ -52,7 +54,7 @@ public final class CompressionIndex {
                   + "preconsolidation pressure (%s Pa) and the largest stress applied before it",
               preconsolidationPressure));
     }
-    return Derived.of(fitIncrements(curve, chosen));
+    return fitOrReason(curve, chosen, "the normally consolidated points");
   }
 
   /**
@@ -64,7 +66,9 @@ public final class CompressionIndex {
    *     zero stress
    * @return the fit over the start and end points of those increments
    * @throws IllegalArgumentException if the list is empty, an increment is out of range or
-   *     repeated, or an increment starts from zero stress (no point on a log axis)
+   *     repeated, an increment starts from zero stress (no point on a log axis), or the points
+   *     admit no straight line (all log<sub>10</sub>&sigma;' equal, stresses a few ulps apart, or a
+   *     slope beyond the double range)
    */
   public static IndexFit overIncrements(CompressionCurve curve, int... increments) {
     Checks.notNull("compression curve", curve);
@@ -154,7 +158,8 @@ public final class CompressionIndex {
    *
    * @param curve the compression curve
    * @param preconsolidationPressure &sigma;'<sub>p</sub>, Pa; finite, &gt; 0
-   * @return the branches in test order; empty when there is none
+   * @return the branches in test order, each fit absent with the reason where its points admit no
+   *     straight line; empty when there is none
    * @throws IllegalArgumentException if the curve is null or the pressure is not finite and
    *     positive
    */
@@ -183,12 +188,26 @@ public final class CompressionIndex {
                 ? Derived.absent(
                     "the branch is a single increment from zero stress: no two points on a log"
                         + " axis")
-                : Derived.of(fitIncrements(curve, members));
+                : fitOrReason(curve, members, "the branch's points");
         out.add(new IndexBranch(kind, j, last, fit));
       }
       j = last + 1;
     }
     return List.copyOf(out);
+  }
+
+  /**
+   * The fit over the given increments, or absent where their points admit no straight line (equal
+   * logarithms of stresses a few ulps apart, or a slope beyond the double range): valid input, so
+   * the reason is returned rather than thrown.
+   */
+  private static Derived<IndexFit> fitOrReason(
+      CompressionCurve curve, List<Integer> increments, String what) {
+    try {
+      return Derived.of(fitIncrements(curve, increments));
+    } catch (IllegalArgumentException e) {
+      return Derived.absent(what + " admit no straight line: " + e.getMessage());
+    }
   }
 
   /** Fits e against log10 stress over the start and end points of the given increments. */

@@ -31,8 +31,9 @@ import java.util.Locale;
  * C<sub>c</sub> = 0.40, load ratio 2) the result lies within 6 % of the break.
  *
  * <p>Absent when the loading envelope has fewer points than the virgin line needs plus one, when
- * the virgin line does not fall with stress, or when A lies at a stress below the first point of
- * the envelope (the curve is not known there). Reference: {@link
+ * the virgin-line points admit no straight line (stresses a few ulps apart have equal logarithms),
+ * when the virgin line does not fall with stress, or when A lies at a stress below the first point
+ * of the envelope (the curve is not known there). Reference: {@link
  * PreconsolidationMethod#PACHECO_SILVA}. Results feed engineering decisions: they must be reviewed
  * by a qualified engineer, and local codes and standards govern. Stateless and thread-safe.
  */
@@ -86,7 +87,19 @@ public final class PachecoSilvaMethod {
           env.idList(0, n),
           warnings);
     }
-    LineFit virgin = env.virginLine(count);
+    LineFit virgin;
+    try {
+      virgin = env.virginLine(count);
+    } catch (IllegalArgumentException noLine) {
+      return PreconsolidationEstimate.absent(
+          method,
+          "the virgin-line points admit no straight line: " + noLine.getMessage(),
+          AXES,
+          List.of(),
+          List.of(),
+          env.idList(0, n),
+          warnings);
+    }
     LoadingEnvelope.lineWarnings("the virgin line", virgin, warnings);
     double[] x = env.log10Stress;
     double[] e = env.voidRatio;

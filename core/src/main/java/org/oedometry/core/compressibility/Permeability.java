@@ -33,7 +33,8 @@ public final class Permeability {
    * @param cv coefficient of consolidation, m^2/s; finite, &gt; 0
    * @param mv coefficient of volume compressibility, 1/Pa; finite, &gt; 0
    * @return k, m/s
-   * @throws IllegalArgumentException if an argument is not finite and positive
+   * @throws IllegalArgumentException if an argument is not finite and positive, or the product is
+   *     not representable (overflows, or underflows to 0)
    */
   public static double fromConsolidation(double cv, double mv) {
     return fromConsolidation(cv, mv, STANDARD_WATER_UNIT_WEIGHT);

@@ -27,15 +27,23 @@ record TwoLineSplit(int split, LineFit early, LineFit late) {
    * @param x abscissae, ordered
    * @param y ordinates
    * @param bend the required bend
-   * @return the best split, or empty if no split bends the required way
+   * @return the best split, or empty if no split bends the required way (a split where a group
+   *     admits no straight line, its abscissae all equal or its slope beyond the double range, is
+   *     not a candidate)
    */
   static Optional<TwoLineSplit> best(double[] x, double[] y, Bend bend) {
     int n = x.length;
     TwoLineSplit best = null;
     double bestRss = Double.POSITIVE_INFINITY;
     for (int k = 2; k <= n - 2; k++) {
-      LineFit early = LineFit.through(x, y, 0, k);
-      LineFit late = LineFit.through(x, y, k, n);
+      LineFit early;
+      LineFit late;
+      try {
+        early = LineFit.through(x, y, 0, k);
+        late = LineFit.through(x, y, k, n);
+      } catch (IllegalArgumentException noLine) {
+        continue;
+      }
       boolean bends =
           bend == Bend.DOWN ? late.slope() < early.slope() : late.slope() > early.slope();
       if (!bends) {

@@ -2,14 +2,14 @@
  * Import and export of an oedometer test as CSV (RFC 4180, UTF-8), a format of this library.
  *
  * <p>A test is three files, usually side by side in one directory. In each, lines starting with
- * {@code #} are comments, blank lines are ignored, white space around cells is removed, and the
- * first record is the header. A column or property that carries a quantity declares its unit at the
- * end of its name, after an underscore: {@code elapsed_min}, {@code settlement_mm}, {@code
- * stress_after_kPa}. The unit tokens are those of {@link org.oedometry.core.LabUnit} ({@code s,
- * min, h, d, yr}; {@code m, mm, um}; {@code m2, cm2, mm2}; {@code Pa, kPa, MPa}; {@code kg, g};
- * {@code kg_m3, Mg_m3}; {@code ratio, percent}), case-sensitive; any other token is an error.
- * Numbers are plain decimals ({@code 12}, {@code -0.5}, {@code 1.5e-3}); NaN, infinity and
- * hexadecimal are errors.
+ * {@code #} are comments, blank lines (empty, or only spaces and tabs) are ignored, white space
+ * around cells is removed, and the first record is the header. A column or property that carries a
+ * quantity declares its unit at the end of its name, after an underscore: {@code elapsed_min},
+ * {@code settlement_mm}, {@code stress_after_kPa}. The unit tokens are those of {@link
+ * org.oedometry.core.LabUnit} ({@code s, min, h, d, yr}; {@code m, mm, um}; {@code m2, cm2, mm2};
+ * {@code Pa, kPa, MPa}; {@code kg, g}; {@code kg_m3, Mg_m3}; {@code ratio, percent}),
+ * case-sensitive; any other token is an error. Numbers are plain decimals ({@code 12}, {@code
+ * -0.5}, {@code 1.5e-3}); NaN, infinity and hexadecimal are errors.
  *
  * <h2>{@code properties.csv}: the specimen and the test (key/value)</h2>
  *

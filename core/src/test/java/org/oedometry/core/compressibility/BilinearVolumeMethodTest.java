@@ -39,6 +39,29 @@ class BilinearVolumeMethodTest {
         .isCloseTo(breakStress, within(breakStress * 1e-9));
   }
 
+  @Test
+  @DisplayName(
+      "Two-line points plus a last point one ulp above the highest stress (equal log s'): the"
+          + " split whose late group has no line is skipped, the break is still exact")
+  void pointOneUlpAboveTheLast() {
+    CompressionCurve c = bilinearInLogVolume(150e3);
+    int n = c.size();
+    double[] s = new double[n + 1];
+    double[] e = new double[n + 1];
+    for (int i = 0; i < n; i++) {
+      s[i] = c.stress(i);
+      e[i] = c.voidRatio(i);
+    }
+    s[n] = Math.nextUp(s[n - 1]);
+    e[n] = Math.nextDown(e[n - 1]);
+    CompressionCurve extended = CompressionCurve.of(c.initialVoidRatio(), s, e);
+    // Expected: the break of the two lines the points were built on (exact, to rounding).
+    assertThat(BilinearVolumeMethod.onitsuka(extended).preconsolidationPressure().getAsDouble())
+        .isCloseTo(150e3, within(150e3 * 1e-9));
+    assertThat(BilinearVolumeMethod.butterfield(extended).preconsolidationPressure().getAsDouble())
+        .isCloseTo(150e3, within(150e3 * 1e-9));
+  }
+
   @ParameterizedTest(name = "break at {0} Pa, w = 0.05")
   @ValueSource(doubles = {100e3, 150e3, 210e3})
   @DisplayName(

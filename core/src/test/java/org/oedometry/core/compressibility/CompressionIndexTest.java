@@ -92,6 +92,39 @@ class CompressionIndexTest {
   }
 
   @Test
+  @DisplayName(
+      "Points one ulp apart in stress (equal log10 s'): C_c and C_r absent with a reason, as the"
+          + " Javadoc and the package contract promise for valid input; overIncrements throws as"
+          + " documented")
+  void pointsWithEqualLogarithms() {
+    // log10(1e5) = 5 exactly; log10 of the next double above 1e5 (relative step 1.5e-16) rounds to
+    // 5 as well (the change, 6e-17, is below half an ulp of 5): no line through the two points.
+    double above = Math.nextUp(100e3);
+    CompressionCurve virgin =
+        CompressionCurve.of(1.0, new double[] {100e3, above}, new double[] {0.95, 0.94});
+    Derived<IndexFit> cc = CompressionIndex.virginLine(virgin, 100e3);
+    assertThat(cc.isPresent()).isFalse();
+    assertThat(cc.absenceReason())
+        .startsWith("the normally consolidated points admit no straight line: ");
+    // Load to 100 kPa, unload to 50 kPa, reload by one ulp: the reloading branch has no line.
+    CompressionCurve loop =
+        CompressionCurve.of(
+            1.0, new double[] {100e3, 50e3, Math.nextUp(50e3)}, new double[] {0.95, 0.96, 0.96});
+    List<IndexBranch> branches = CompressionIndex.branches(loop, 200e3);
+    assertThat(branches)
+        .extracting(IndexBranch::kind)
+        .containsExactly(
+            IncrementClass.RECOMPRESSION, IncrementClass.UNLOADING, IncrementClass.RELOADING);
+    assertThat(branches.get(1).fit().isPresent()).isTrue();
+    assertThat(branches.get(2).fit().isPresent()).isFalse();
+    assertThat(branches.get(2).fit().absenceReason())
+        .startsWith("the branch's points admit no straight line: ");
+    assertThatThrownBy(() -> CompressionIndex.overIncrements(loop, 2))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("distinct abscissae");
+  }
+
+  @Test
   @DisplayName("No normally consolidated increment: C_c absent with the reason, no exception")
   void noVirginIncrement() {
     Derived<IndexFit> cc = CompressionIndex.virginLine(CURVE, 5e6);

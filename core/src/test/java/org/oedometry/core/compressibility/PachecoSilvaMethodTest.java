@@ -118,6 +118,20 @@ class PachecoSilvaMethodTest {
   }
 
   @Test
+  @DisplayName(
+      "Virgin line through two points one ulp apart in stress (equal log10 s'): absent with a"
+          + " reason, not an exception (the Javadoc's @throws names only null arguments)")
+  void virginPointsWithEqualLogarithms() {
+    double[] s = {50e3, 100e3, 200e3, 400e3, Math.nextUp(400e3)};
+    PreconsolidationEstimate p =
+        PachecoSilvaMethod.estimate(
+            CompressionCurve.of(1.0, s, new double[] {0.99, 0.98, 0.9, 0.8, 0.79}),
+            new PreconsolidationOptions(2));
+    assertThat(p.preconsolidationPressure()).isEmpty();
+    assertThat(p.absenceReason()).startsWith("the virgin-line points admit no straight line: ");
+  }
+
+  @Test
   @DisplayName("Options: the virgin line through more points changes nothing on exact data")
   void options() {
     CompressionCurve c =

@@ -171,6 +171,25 @@ class OedometerTestCsvReaderTest {
   }
 
   @Test
+  @DisplayName(
+      "blank lines of spaces or tabs (a hand-edited file, CRLF or LF) are ignored, as the package"
+          + " documentation says of blank lines: the same test as the clean files")
+  void blankLinesOfSpaces() {
+    OedometerTest clean = parse(PROPERTIES, INCREMENTS, READINGS);
+    assertThat(
+            parse(
+                PROPERTIES + "   \n\t\n",
+                INCREMENTS.replace("1,0,50\n", "1,0,50\n  \t \n").replace("\n", "\r\n"),
+                READINGS.replace("2,0,0\n", " \n2,0,0\n") + "\n \n"))
+        .isEqualTo(clean);
+    // A row with cells still counts: spaces around commas do not make a blank line.
+    assertBad(PROPERTIES, INCREMENTS, READINGS.replace("2,0,0\n", " , , \n2,0,0\n"))
+        .hasMessage(
+            "readings.csv line 5, column increment, value '': not an increment number (a"
+                + " whole number >= 1)");
+  }
+
+  @Test
   @DisplayName("G_s outside 2.0-3.2 reads with a warning (peat-like 1.8)")
   void unusualSpecificGravityWarns() {
     OedometerTest t =

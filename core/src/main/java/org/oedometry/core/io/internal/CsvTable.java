@@ -19,9 +19,10 @@ import org.oedometry.core.io.TestDataException;
  * the API.
  *
  * <p>Format: RFC 4180 as read by Commons CSV's default format, with {@code #} comment lines, blank
- * lines ignored, white space around cells removed and an optional byte-order mark. The first record
- * is the header; every row must have as many cells as the header. Every failure of Commons CSV is
- * translated into a {@link TestDataException}.
+ * lines (empty, only spaces and tabs, or one quoted empty cell) ignored, white space around cells
+ * removed and an optional byte-order mark. The first record is the header; every row must have as
+ * many cells as the header. Every failure of Commons CSV is translated into a {@link
+ * TestDataException}.
  */
 public final class CsvTable {
 
@@ -87,6 +88,9 @@ public final class CsvTable {
     try (CSVParser parser = CSVParser.parse(body, FORMAT)) {
       for (CSVRecord record : parser) {
         lastLine = parser.getCurrentLineNumber();
+        if (record.size() == 1 && record.get(0).isEmpty()) {
+          continue; // a line of only spaces or tabs: Commons CSV skips only empty lines
+        }
         records.add(new Row(lastLine, record.toList()));
       }
     } catch (IOException | UncheckedIOException | IllegalStateException e) {
