@@ -78,6 +78,47 @@ class ClayLayerTest {
   }
 
   @Test
+  @DisplayName(
+      "Extreme but legal layers: U(0) = 0 on a 1e-200 m layer (H_dr^2 underflows), U(+inf) = 1"
+          + " on a 1e200 m layer (H_dr^2 overflows), and t50 = T50 H_dr^2 / c_v (Terzaghi's"
+          + " closed form, evaluated here in BigDecimal) on the 1e200 m layer")
+  void extremeLayers() {
+    ClayLayer thin = ClayLayer.of(1e-200, Drainage.DOUBLE, 1e-8, 0.1);
+    assertThat(thin.timeFactorAt(0)).isZero();
+    assertThat(thin.degreeAt(0)).isZero();
+    assertThat(thin.settlementAt(0)).isZero();
+    ClayLayer thick = ClayLayer.of(1e200, Drainage.DOUBLE, 1e300, 0.1);
+    assertThat(thick.degreeAt(Double.POSITIVE_INFINITY)).isEqualTo(1.0);
+    java.math.BigDecimal path = new java.math.BigDecimal(thick.drainagePath());
+    double t50 =
+        new java.math.BigDecimal(Terzaghi.TIME_FACTOR_50)
+            .multiply(path)
+            .multiply(path)
+            .divide(new java.math.BigDecimal(1e300), java.math.MathContext.DECIMAL128)
+            .doubleValue();
+    assertThat(thick.timeToDegree(0.5)).isCloseTo(t50, within(2 * Math.ulp(t50)));
+    // U = 2 sqrt(T / pi) for small T (FACTS, short-time form), T = 1e300 * 1 s / (5e199 m)^2.
+    assertThat(thick.degreeAt(1)).isCloseTo(2 * Math.sqrt(4e-100 / Math.PI), within(1e-63));
+  }
+
+  @Test
+  @DisplayName(
+      "A time beyond the double range is refused as documented (@throws), never returned as"
+          + " infinity; toString says so without quoting infinity")
+  void timeBeyondTheDoubleRange() {
+    ClayLayer layer = ClayLayer.of(1e200, Drainage.DOUBLE, 1e-300, 0.1);
+    assertThatThrownBy(() -> layer.timeToDegree(0.5))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "time to reach U = 0.5 exceeds the largest double (1.7976931348623157E308 s): cv"
+                + " (1.0E-300 m^2/s) is too small for the drainage path (5.0E199 m)");
+    assertThatThrownBy(() -> layer.timeToSettlement(0.05))
+        .isInstanceOf(IllegalArgumentException.class);
+    assertThat(layer.timeToDegree(0)).isZero();
+    assertThat(layer.toString()).contains("t50 beyond 1.8e+308 yr").doesNotContain("Infinity");
+  }
+
+  @Test
   void rejectsUnreachableSettlement() {
     ClayLayer layer = ClayLayer.of(2.0, Drainage.DOUBLE, 1e-8, 0.1);
     assertThatThrownBy(() -> layer.timeToSettlement(0.1))

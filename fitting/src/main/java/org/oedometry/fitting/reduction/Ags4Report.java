@@ -2,6 +2,7 @@ package org.oedometry.fitting.reduction;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -44,7 +45,8 @@ import org.oedometry.fitting.CvMethod;
  * SAMP_TOP), the TRAN_AGS value ("4.1"), whether TRAN_DATE may be empty (we leave it empty so that
  * the same report gives the same file), the exact spelling of the data types (nDP, nSF, nSCI) and
  * whether DICT_TYPE and DICT_STAT values need ABBR rows (we write them). SAMP_TOP is the leading
- * number of the identifiers' depth text, or empty when it has none.
+ * number of the identifiers' depth text, rounded half-up to 2 decimal places as written, or empty
+ * when it has none.
  */
 final class Ags4Report {
 
@@ -437,10 +439,16 @@ final class Ags4Report {
     return '"' + field.replace("\"", "\"\"") + '"';
   }
 
-  /** The leading number of a depth text such as "6.2 m", or empty. */
+  /**
+   * The leading number of a depth text such as "6.2 m", rounded half-up to 2 decimal places from
+   * the decimal digits as written (not through a double, which would turn "2.675" into 2.67 and a
+   * number beyond the double range into infinity), or empty.
+   */
   static String sampleTop(String depth) {
     Matcher m = Pattern.compile("^\\s*([0-9]+(?:\\.[0-9]+)?)").matcher(depth);
-    return m.find() ? fixed(OptionalDouble.of(Double.parseDouble(m.group(1))), 2) : "";
+    return m.find()
+        ? new BigDecimal(m.group(1)).setScale(2, RoundingMode.HALF_UP).toPlainString()
+        : "";
   }
 
   private static OptionalDouble mm(OptionalDouble metres) {
@@ -461,7 +469,7 @@ final class Ags4Report {
       return "";
     }
     return new BigDecimal(value.getAsDouble())
-        .setScale(places, java.math.RoundingMode.HALF_UP)
+        .setScale(places, RoundingMode.HALF_UP)
         .toPlainString();
   }
 
@@ -471,7 +479,7 @@ final class Ags4Report {
       return "";
     }
     return new BigDecimal(value.get())
-        .round(new MathContext(figures, java.math.RoundingMode.HALF_UP))
+        .round(new MathContext(figures, RoundingMode.HALF_UP))
         .toPlainString();
   }
 

@@ -10,11 +10,15 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
+import java.util.stream.Stream;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.oedometry.core.compressibility.IncrementCompressibility;
 import org.oedometry.core.compressibility.PreconsolidationMethod;
 import org.oedometry.fitting.CvMethod;
@@ -50,7 +54,8 @@ class Ags4ReportTest {
         continue;
       }
       // AGS4 rule: every field quoted, separated by commas.
-      assertThat(line).matches("\"([^\"]|\"\")*\"(,\"([^\"]|\"\")*\")*");
+      // (Possessive: a 20 000-character field must not exhaust the regex engine's stack.)
+      assertThat(line).matches("\"(?:[^\"]++|\"\")*+\"(?:,\"(?:[^\"]++|\"\")*+\")*+");
       CSVRecord r;
       try (CSVParser p = CSVParser.parse(new StringReader(line), CSVFormat.RFC4180)) {
         r = p.getRecords().get(0);
@@ -116,7 +121,11 @@ class Ags4ReportTest {
       "AGS4 file rules (from memory): quoted fields, CR LF, GROUP/HEADING/UNIT/TYPE/DATA rows, one"
           + " blank line between groups, the groups PROJ, TRAN, UNIT, TYPE, DICT present")
   void followsTheFileRules() throws IOException {
-    String text = REPORT.toAgs4();
+    checkFileRules(REPORT.toAgs4());
+  }
+
+  /** Every file rule that {@link #followsTheFileRules()} names. */
+  private static Map<String, Group> checkFileRules(String text) throws IOException {
     assertThat(text.replace("\r\n", "")).doesNotContain("\n").doesNotContain("\r");
     assertThat(text).startsWith("\"GROUP\",\"PROJ\"\r\n");
     assertThat(text).contains("\r\n\r\n\"GROUP\",\"CONS\"\r\n");
@@ -172,6 +181,38 @@ class Ags4ReportTest {
     assertThat(cons.unit("CONS_CVRT")).isEqualTo("m2/yr");
     assertThat(cons.unit("CONS_INMV")).isEqualTo("m2/MN");
     assertThat(cons.unit("CONS_INCF")).isEqualTo("kPa");
+    return groups;
+  }
+
+  static Stream<Arguments> unusualReports() {
+    List<Arguments> out = new ArrayList<>();
+    out.add(
+        Arguments.of(
+            "hostile identifiers",
+            ReductionFixtures.withIdentifiers(REPORT, ReductionFixtures.hostileIdentifiers())));
+    for (int i = 0; i < ReductionFixtures.SHAPE_NAMES.size(); i++) {
+      out.add(
+          Arguments.of(
+              ReductionFixtures.SHAPE_NAMES.get(i), ReductionFixtures.unusualShapes().get(i)));
+    }
+    return out.stream();
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("unusualReports")
+  @DisplayName(
+      "AGS4 file rules (from memory, as above) hold for hostile identifiers (quotes, commas,"
+          + " backslash, non-ASCII, 20 000 characters, a 401-digit depth) and for unusual tests;"
+          + " the labels read back unchanged, one CONS row per increment")
+  void unusualReportsFollowTheFileRules(String name, TestReport report) throws IOException {
+    Map<String, Group> groups = checkFileRules(report.toAgs4());
+    assertThat(groups.get("PROJ").data().get(0).get("PROJ_NAME"))
+        .isEqualTo(report.identifiers().project());
+    Map<String, String> cong = groups.get("CONG").data().get(0);
+    assertThat(cong.get("LOCA_ID")).isEqualTo(report.identifiers().borehole());
+    assertThat(cong.get("SAMP_ID")).isEqualTo(report.identifiers().sample());
+    assertThat(cong.get("SAMP_TOP")).isEqualTo(Ags4Report.sampleTop(report.identifiers().depth()));
+    assertThat(groups.get("CONS").data()).hasSize(report.increments().size());
   }
 
   @Test
@@ -253,5 +294,16 @@ class Ags4ReportTest {
     assertThat(Ags4Report.sampleTop("6.2 m")).isEqualTo("6.20");
     assertThat(Ags4Report.sampleTop(" 12 m below ground")).isEqualTo("12.00");
     assertThat(Ags4Report.sampleTop("unknown")).isEmpty();
+  }
+
+  @Test
+  @DisplayName(
+      "SAMP_TOP (TYPE 2DP: two decimal places) rounds the decimal the lab wrote half-up, as the"
+          + " class documents: 2.675 -> 2.68 (not 2.67 through the double 2.67499...), and a"
+          + " leading number beyond the double range is written exactly instead of failing")
+  void sampleDepthIsRoundedAsWritten() {
+    assertThat(Ags4Report.sampleTop("2.675 m")).isEqualTo("2.68");
+    String huge = "1" + "0".repeat(400);
+    assertThat(Ags4Report.sampleTop(huge + ".005 m")).isEqualTo(huge + ".01");
   }
 }

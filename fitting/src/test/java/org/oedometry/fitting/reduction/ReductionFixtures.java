@@ -78,6 +78,91 @@ final class ReductionFixtures {
         cvScale);
   }
 
+  /**
+   * Labels that a writer must escape: quotes, commas, a backslash, a semicolon, non-ASCII letters,
+   * a character outside the Basic Multilingual Plane, U+2028 (a line separator to JavaScript but
+   * not a control character, so {@link TestIdentifiers} accepts it), a 20 000-character sample
+   * reference, and a depth whose leading number (401 digits) lies beyond the double range.
+   */
+  static TestIdentifiers hostileIdentifiers() {
+    return TestIdentifiers.of(
+        "Invented \"quoted\", project; C:\\data\\x \u00e9t\u00e9 \u65e5\u672c \ud83d\ude00",
+        "BH,\"1\"\u2028b",
+        "S".repeat(20_000),
+        "1" + "0".repeat(400) + ".005 m, \"top\"");
+  }
+
+  /** The report with other identifiers (the rest unchanged), so that writers see hostile labels. */
+  static TestReport withIdentifiers(TestReport r, TestIdentifiers identifiers) {
+    return new TestReport(
+        identifiers,
+        r.specimen(),
+        r.drainage(),
+        r.drainagePathRule(),
+        r.options(),
+        r.heightOfSolidsMetres(),
+        r.initialVoidRatio(),
+        r.seatingStressPascals(),
+        r.increments(),
+        r.compressionCurve(),
+        r.preconsolidation(),
+        r.preconsolidationForClasses(),
+        r.compressionIndex(),
+        r.recompressionBranches(),
+        r.permeabilityChange());
+  }
+
+  /**
+   * Legal tests of unusual shape, each reduced with the default options: a single increment; load,
+   * unload and reload; a single swelling (unloading) increment; increments whose readings never
+   * move. Exact Terzaghi curves ({@link ConsolidationCurveModel}) on the usual lab schedule.
+   */
+  static List<TestReport> unusualShapes() {
+    return Shapes.REPORTS;
+  }
+
+  /** The names of {@link #unusualShapes()}, in the same order. */
+  static final List<String> SHAPE_NAMES =
+      List.of("one increment", "load, unload, reload", "one swelling increment", "readings flat");
+
+  private static final class Shapes {
+    static final List<TestReport> REPORTS =
+        List.of(
+            TestReduction.reduce(shape(new double[] {25, 50}, new double[] {0.15})),
+            TestReduction.reduce(
+                shape(
+                    new double[] {25, 50, 100, 200, 400, 100, 25, 100, 400, 800},
+                    new double[] {0.15, 0.45, 0.9, 0.8, -0.08, -0.06, 0.05, 0.1, 0.7})),
+            TestReduction.reduce(shape(new double[] {100, 50}, new double[] {-0.05})),
+            TestReduction.reduce(shape(new double[] {25, 50, 100}, new double[] {0, 0})));
+  }
+
+  /** Increments between the stresses (kPa), primary compression (mm) each, c_v 3 m^2/yr. */
+  private static OedometerTest shape(double[] stressesKpa, double[] primaryMm) {
+    double[] times = ReadingSchedules.withZeroReading(ReadingSchedules.usualLab());
+    List<LoadIncrement> increments = new ArrayList<>();
+    double height = 0.020;
+    for (int j = 0; j < primaryMm.length; j++) {
+      double dp = primaryMm[j] / 1000;
+      double[] d = new double[times.length];
+      if (dp != 0) {
+        ConsolidationCurveModel model =
+            ConsolidationCurveModel.of(Drainage.DOUBLE.drainagePath(height));
+        CurveParameters p = CurveParameters.of(0.05 * dp, dp, 3 / YEAR, 0.03 * dp);
+        for (int k = 1; k < times.length; k++) {
+          d[k] = model.settlement(times[k], p);
+        }
+      }
+      SettlementCurve curve = SettlementCurve.of(times, d);
+      increments.add(LoadIncrement.of(stressesKpa[j] * 1000, stressesKpa[j + 1] * 1000, curve));
+      height -= curve.finalSettlementMetres();
+    }
+    return OedometerTest.builder(specimen())
+        .identifiers(TestIdentifiers.of("Invented shapes, for tests", "BH-T2", "S2", "4 m"))
+        .increments(increments)
+        .build();
+  }
+
   private static OedometerTest build(
       Drainage drainage, DrainagePathRule rule, int broken, List<Double> paths, double cvScale) {
     double[] times = ReadingSchedules.withZeroReading(ReadingSchedules.usualLab());

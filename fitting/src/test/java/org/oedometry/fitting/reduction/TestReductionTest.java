@@ -7,6 +7,7 @@ import java.util.List;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.DrainagePathRule;
+import org.oedometry.core.LoadDirection;
 import org.oedometry.core.LoadIncrement;
 import org.oedometry.core.OedometerTest;
 import org.oedometry.core.SettlementCurve;
@@ -266,6 +267,43 @@ class TestReductionTest {
       assertThat(inc.methods())
           .allSatisfy(
               m -> assertThat(m.estimate().isPresent()).isEqualTo(m.failureReason().isBlank()));
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "Unusual legal tests reduce without an exception (one increment; load, unload, reload;"
+          + " swelling; flat readings), with what the class documents: one row per increment, one"
+          + " swelling warning per unloading increment, a method without a value has its reason"
+          + " and a METHOD_GAVE_NO_VALUE warning")
+  void unusualShapesReduce() {
+    List<TestReport> reports = ReductionFixtures.unusualShapes();
+    int[] increments = {1, 9, 1, 2};
+    for (int i = 0; i < reports.size(); i++) {
+      TestReport r = reports.get(i);
+      assertThat(r.increments()).as(ReductionFixtures.SHAPE_NAMES.get(i)).hasSize(increments[i]);
+      for (IncrementReport inc : r.increments()) {
+        long swelling =
+            inc.warnings().stream()
+                .filter(w -> w.kind() == FitWarning.Kind.SWELLING_INCREMENT)
+                .count();
+        assertThat(swelling).isEqualTo(inc.direction() == LoadDirection.UNLOADING ? 1 : 0);
+        for (MethodOutcome m : inc.methods()) {
+          if (m.estimate().isEmpty()) {
+            assertThat(m.failureReason()).isNotBlank();
+            assertThat(inc.warnings())
+                .anySatisfy(
+                    w -> {
+                      assertThat(w.kind()).isEqualTo(FitWarning.Kind.METHOD_GAVE_NO_VALUE);
+                      assertThat(w.method()).contains(m.method());
+                    });
+          }
+        }
+      }
+    }
+    // Readings that never move: no method can find a c_v (there is no consolidation to time).
+    for (IncrementReport inc : reports.get(3).increments()) {
+      assertThat(inc.methods()).allSatisfy(m -> assertThat(m.estimate()).isEmpty());
     }
   }
 }

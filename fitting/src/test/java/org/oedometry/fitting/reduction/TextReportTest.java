@@ -3,10 +3,15 @@ package org.oedometry.fitting.reduction;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.oedometry.fitting.CvMethod;
 
 class TextReportTest {
@@ -83,5 +88,57 @@ class TextReportTest {
         .contains("Permeability change index C_k")
         .contains("Preconsolidation pressure sigma'_p")
         .contains("reviewed by a qualified engineer");
+  }
+
+  static Stream<Arguments> unusualReports() {
+    List<Arguments> out = new ArrayList<>();
+    out.add(
+        Arguments.of(
+            "hostile identifiers",
+            ReductionFixtures.withIdentifiers(REPORT, ReductionFixtures.hostileIdentifiers())));
+    for (int i = 0; i < ReductionFixtures.SHAPE_NAMES.size(); i++) {
+      out.add(
+          Arguments.of(
+              ReductionFixtures.SHAPE_NAMES.get(i), ReductionFixtures.unusualShapes().get(i)));
+    }
+    return out.stream();
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("unusualReports")
+  @DisplayName(
+      "Hostile identifiers and unusual tests: no control character but the documented '\\n' line"
+          + " ends, the labels verbatim on the second line, one table row per increment, every"
+          + " warning, drainage path and missing value with its reason")
+  void unusualReportsStayReadable(String name, TestReport report) {
+    String text = report.toText();
+    assertThat(text.chars().filter(c -> c != '\n' && Character.isISOControl(c))).isEmpty();
+    List<String> lines = text.lines().toList();
+    assertThat(lines.get(1))
+        .isEqualTo(
+            "Project: "
+                + report.identifiers().project()
+                + "   Borehole: "
+                + report.identifiers().borehole()
+                + "   Sample: "
+                + report.identifiers().sample()
+                + "   Depth: "
+                + report.identifiers().depth());
+    int header = lines.indexOf(lines.stream().filter(l -> l.startsWith("Inc ")).findFirst().get());
+    for (int j = 0; j < report.increments().size(); j++) {
+      assertThat(lines.get(header + 2 + j)).startsWith((j + 1) + " ");
+    }
+    for (IncrementReport inc : report.increments()) {
+      assertThat(text).contains(inc.drainagePath().explanation());
+      for (ReductionWarning w : inc.warnings()) {
+        assertThat(text).contains(w.message());
+      }
+      if (inc.compressibility().value().isEmpty()) {
+        assertThat(text).contains(inc.compressibility().absenceReason());
+      }
+      if (inc.secondaryCompression().value().isEmpty()) {
+        assertThat(text).contains(inc.secondaryCompression().absenceReason());
+      }
+    }
   }
 }
