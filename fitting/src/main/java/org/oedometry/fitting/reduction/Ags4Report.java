@@ -250,7 +250,11 @@ final class Ags4Report {
       row.add(
           c == null
               ? ""
-              : sig(java.util.Optional.of(ReportUnits.squareMetresPerMeganewton(c.mv())), 3));
+              : sig(
+                  boxed(
+                      ReportUnits.map(
+                          OptionalDouble.of(c.mv()), ReportUnits::squareMetresPerMeganewton)),
+                  3));
       row.add(sig(inc.secondaryCompression().value().map(x -> x.secondaryCompressionIndex()), 3));
       row.add(
           sig(

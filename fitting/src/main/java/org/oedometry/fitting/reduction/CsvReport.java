@@ -81,9 +81,17 @@ final class CsvReport {
           c.map(
                   x ->
                       number(
-                          ReportUnits.squareMetresPerMeganewton(x.coefficientOfCompressibility())))
+                          ReportUnits.map(
+                              OptionalDouble.of(x.coefficientOfCompressibility()),
+                              ReportUnits::squareMetresPerMeganewton)))
               .orElse(""));
-      f.add(c.map(x -> number(ReportUnits.squareMetresPerMeganewton(x.mv()))).orElse(""));
+      f.add(
+          c.map(
+                  x ->
+                      number(
+                          ReportUnits.map(
+                              OptionalDouble.of(x.mv()), ReportUnits::squareMetresPerMeganewton)))
+              .orElse(""));
       for (CvMethod m : methods) {
         f.add(
             inc.outcome(m)

@@ -63,7 +63,19 @@ final class ReportUnits {
   }
 
   /** Maps a present value. */
+  /**
+   * A value in a lab unit, or empty where it is absent or its lab unit leaves the double range (the
+   * unit conversions of {@link Units} refuse to overflow: m_v of stresses near 1e-306 Pa in m^2/MN,
+   * say); the report then shows it as absent instead of failing.
+   */
   static OptionalDouble map(OptionalDouble value, java.util.function.DoubleUnaryOperator f) {
-    return value.isPresent() ? OptionalDouble.of(f.applyAsDouble(value.getAsDouble())) : value;
+    if (value.isEmpty()) {
+      return value;
+    }
+    try {
+      return OptionalDouble.of(f.applyAsDouble(value.getAsDouble()));
+    } catch (IllegalArgumentException beyondTheRange) {
+      return OptionalDouble.empty();
+    }
   }
 }

@@ -168,7 +168,9 @@ public record TestReport(
    * One CSV row per increment (RFC 4180 quoting, '\n' line ends) with the units in the headers; see
    * {@link #csvHeaders()}. Absent values are empty fields; numbers are written with {@link
    * Double#toString(double)} after unit conversion (no rounding, so that a program reading the file
-   * gets the report's values).
+   * gets the report's values). A value whose lab unit would leave the double range (m<sub>v</sub>
+   * in m^2/MN at stresses near 1e-306 Pa, say) is written as absent here and in {@link #toText()}
+   * and {@link #toAgs4()}; {@link #toJson()} keeps SI units and the value.
    *
    * @return the CSV text with a header row
    */

@@ -137,6 +137,14 @@ final class ReductionFixtures {
             TestReduction.reduce(shape(new double[] {25, 50, 100}, new double[] {0, 0})));
   }
 
+  /**
+   * A legal test at absurdly small stresses (2e-306 to 8e-306 Pa), where m_v exceeds 1e300 per
+   * pascal and cannot be written in m^2/MN.
+   */
+  static OedometerTest tinyStresses() {
+    return shape(new double[] {2e-309, 4e-309, 8e-309}, new double[] {0.45, 0.9});
+  }
+
   /** Increments between the stresses (kPa), primary compression (mm) each, c_v 3 m^2/yr. */
   private static OedometerTest shape(double[] stressesKpa, double[] primaryMm) {
     double[] times = ReadingSchedules.withZeroReading(ReadingSchedules.usualLab());

@@ -23,6 +23,25 @@ class TestReportTest {
   }
 
   @Test
+  @DisplayName(
+      "Stresses of 2e-306 to 8e-306 Pa (legal): m_v is beyond the double range in m^2/MN (IEEE 754"
+          + " largest double 1.8e308), so the text, CSV and AGS4 reports show it absent instead of"
+          + " failing, and no report quotes NaN or infinity")
+  void valuesBeyondTheRangeOfTheirLabUnitAreAbsent() {
+    TestReport r = TestReduction.reduce(ReductionFixtures.tinyStresses());
+    double mv = r.increments().get(0).mv().orElseThrow();
+    assertThat(mv * 1e6).isInfinite();
+    for (String report : List.of(r.toText(), r.toCsv(), r.toAgs4(), r.toJson(), r.toString())) {
+      assertThat(report).doesNotContain("Infinity").doesNotContain("NaN");
+    }
+    String[] firstRow = r.toCsv().lines().skip(1).findFirst().orElseThrow().split(",", -1);
+    String[] header = r.toCsv().lines().findFirst().orElseThrow().split(",", -1);
+    int mvColumn = List.of(header).indexOf("mv (m2/MN)");
+    assertThat(mvColumn).as("m_v column in %s", List.of(header)).isNotNegative();
+    assertThat(firstRow[mvColumn]).isEmpty();
+  }
+
+  @Test
   @DisplayName("A report needs an increment and a positive e0")
   void validates() {
     assertThatThrownBy(
