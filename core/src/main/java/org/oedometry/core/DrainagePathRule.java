@@ -54,9 +54,15 @@ public enum DrainagePathRule {
         switch (this) {
           case START_HEIGHT -> heightAtStartMetres;
           case HEIGHT_AT_HALF_CONSOLIDATION -> heightAtHalfConsolidationMetres;
-          case MEAN_HEIGHT -> 0.5 * (heightAtStartMetres + heightAtEndMetres);
+          case MEAN_HEIGHT -> mean(heightAtStartMetres, heightAtEndMetres);
         };
     return drainage.drainagePath(height);
+  }
+
+  /** The mean of two finite positive heights, without overflow when their sum exceeds a double. */
+  private static double mean(double a, double b) {
+    double sum = a + b;
+    return Double.isFinite(sum) ? 0.5 * sum : 0.5 * a + 0.5 * b;
   }
 
   /**

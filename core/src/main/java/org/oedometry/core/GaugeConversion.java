@@ -76,7 +76,15 @@ public record GaugeConversion(LabUnit unit, GaugeDirection direction) {
   public double travelMetres(double reading, double reference) {
     Checks.finite(reading, "gauge reading", unit.symbol());
     Checks.finite(reference, "gauge reference reading", unit.symbol());
-    return unit.toSi(direction.sign() * (reading - reference));
+    double travel = direction.sign() * (reading - reference);
+    if (!Double.isFinite(travel)) {
+      throw new IllegalArgumentException(
+          Checks.format(
+              "gauge travel from the reference reading (%s %s) to the reading (%s %s) is beyond"
+                  + " the range of a double",
+              Checks.number(reference), unit.symbol(), Checks.number(reading), unit.symbol()));
+    }
+    return unit.toSi(travel);
   }
 
   /**
@@ -91,7 +99,7 @@ public record GaugeConversion(LabUnit unit, GaugeDirection direction) {
    *     no correction
    * @return the specimen's settlement curve
    * @throws IllegalArgumentException as {@link SettlementCurve#of}, or if a reading or the
-   *     deflection is not finite
+   *     deflection is not finite, or a settlement would be beyond the range of a double
    * @throws NullPointerException if an array is null
    */
   public SettlementCurve curve(
@@ -111,6 +119,16 @@ public record GaugeConversion(LabUnit unit, GaugeDirection direction) {
                 i, Checks.number(readings[i]), unit.symbol()));
       }
       settlement[i] = travelMetres(readings[i], readingAtStart) - apparatusDeflectionMetres;
+      if (!Double.isFinite(settlement[i])) {
+        throw new IllegalArgumentException(
+            Checks.format(
+                "gauge reading at index %d (%s %s) less the apparatus deflection (%s m) is beyond"
+                    + " the range of a double",
+                i,
+                Checks.number(readings[i]),
+                unit.symbol(),
+                Checks.number(apparatusDeflectionMetres)));
+      }
     }
     return SettlementCurve.of(elapsedSeconds, settlement);
   }

@@ -20,7 +20,8 @@ import org.oedometry.theory.Drainage;
  *
  * <p><b>Checks.</b> At least one increment; the stress before each increment equals the stress
  * after the previous one (to a relative 1e-9); the specimen height stays above the height of solids
- * at the start and at every reading (void ratio &gt; 0).
+ * at the start and at every reading (void ratio &gt; 0), and every height and void ratio is a
+ * finite double, so that the heights and void ratios this class gives are finite.
  *
  * <p><b>Defaults.</b> Double drainage ({@link Drainage#DOUBLE}), drainage path from the height at
  * 50 % consolidation ({@link DrainagePathRule#HEIGHT_AT_HALF_CONSOLIDATION}), empty identifiers.
@@ -70,7 +71,18 @@ public final class OedometerTest {
     startHeights = new double[increments.size() + 1];
     startHeights[0] = specimen.initialHeightMetres();
     for (int i = 0; i < increments.size(); i++) {
-      startHeights[i + 1] = startHeights[i] - increments.get(i).curve().finalSettlementMetres();
+      SettlementCurve c = increments.get(i).curve();
+      for (int j = 0; j < c.size(); j++) {
+        if (!Double.isFinite(startHeights[i] - c.settlementMetres(j))) {
+          throw new IllegalArgumentException(
+              Checks.format(
+                  "settlement at reading %d of the increment at index %d (%s m) takes the"
+                      + " specimen height (%s m at the start of the increment) beyond the range"
+                      + " of a double",
+                  j, i, Checks.number(c.settlementMetres(j)), Checks.number(startHeights[i])));
+        }
+      }
+      startHeights[i + 1] = startHeights[i] - c.finalSettlementMetres();
     }
     double finalHeight = startHeights[increments.size()];
     if (!(finalHeight > 0)) {
@@ -91,6 +103,7 @@ public final class OedometerTest {
                   + " final water content: initial void ratio would be <= 0",
               Checks.number(startHeights[0]), Checks.number(heightOfSolids)));
     }
+    checkVoidRatioFinite(startHeights[0], "initial specimen height");
     for (int i = 0; i < increments.size(); i++) {
       SettlementCurve c = increments.get(i).curve();
       for (int j = 0; j < c.size(); j++) {
@@ -102,7 +115,19 @@ public final class OedometerTest {
                       + " above the height of solids (%s m): void ratio would be <= 0",
                   j, i, Checks.number(h), Checks.number(heightOfSolids)));
         }
+        checkVoidRatioFinite(
+            h, Checks.format("specimen height at reading %d of the increment at index %d", j, i));
       }
+    }
+  }
+
+  private void checkVoidRatioFinite(double height, String what) {
+    if (!Double.isFinite(height / heightOfSolids)) {
+      throw new IllegalArgumentException(
+          Checks.format(
+              "%s (%s m) is too large for a void ratio: more than the largest double times the"
+                  + " height of solids (%s m)",
+              what, Checks.number(height), Checks.number(heightOfSolids)));
     }
   }
 
@@ -419,8 +444,9 @@ public final class OedometerTest {
      *
      * @return the test
      * @throws IllegalArgumentException if there is no increment, a stress before differs from the
-     *     stress after the previous increment, the settlements exceed the initial height, or a
-     *     height reaches the height of solids
+     *     stress after the previous increment, the settlements exceed the initial height, a height
+     *     reaches the height of solids, or a height or void ratio at a reading would exceed the
+     *     range of a double
      * @throws NullPointerException if the drainage, rule, identifiers or an increment is null
      */
     public OedometerTest build() {

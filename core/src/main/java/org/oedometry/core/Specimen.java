@@ -75,7 +75,13 @@ public final class Specimen {
     if (b.diameter.isPresent()) {
       double d = Checks.positive(b.diameter.getAsDouble(), "diameter", "m");
       diameter = OptionalDouble.of(d);
-      area = Checks.positive(Math.PI * d * d / 4, "area from the diameter", "m^2");
+      area = Math.PI * d * d / 4;
+      if (!(area > 0) || area == Double.POSITIVE_INFINITY) {
+        throw new IllegalArgumentException(
+            Checks.format(
+                "diameter (%s m) gives an area pi D^2 / 4 outside the range of a positive double",
+                Checks.number(d)));
+      }
     } else {
       diameter = OptionalDouble.empty();
       area = Checks.positive(b.area.getAsDouble(), "area", "m^2");
@@ -91,6 +97,13 @@ public final class Specimen {
       solidsBasis = SolidsBasis.DRY_MASS;
       solidsValue = Checks.positive(b.dryMass.getAsDouble(), "dry mass", "kg");
       double hs = solidsValue / (specificGravity * WATER_DENSITY * area);
+      if (hs == Double.POSITIVE_INFINITY) {
+        throw new IllegalArgumentException(
+            Checks.format(
+                "dry mass (%s kg) over G_s rho_w A (%s kg/m) gives a height of solids beyond the"
+                    + " range of a double",
+                Checks.number(solidsValue), Checks.number(specificGravity * WATER_DENSITY * area)));
+      }
       if (!(hs > 0) || !Double.isFinite(initialHeight / hs)) {
         throw new IllegalArgumentException(
             Checks.format(
@@ -125,11 +138,11 @@ public final class Specimen {
         throw new IllegalArgumentException(
             Checks.format(
                 "bulk density (%s kg/m^3) with initial water content %s and specific gravity"
-                    + " %s gives a void ratio of %s, not finite and > 0",
+                    + " %s gives a void ratio %s, not finite and > 0",
                 Checks.number(bulkDensity.getAsDouble()),
                 Checks.number(initialWaterContent.getAsDouble()),
                 Checks.number(specificGravity),
-                Checks.number(e0)));
+                Double.isFinite(e0) ? "of " + Checks.number(e0) : "beyond the range of a double"));
       }
     }
   }

@@ -57,4 +57,17 @@ class DrainagePathRuleTest {
     assertThatThrownBy(() -> DrainagePathRule.MEAN_HEIGHT.drainagePath(null, 0.02, 0.02, 0.02))
         .isInstanceOf(NullPointerException.class);
   }
+
+  @Test
+  @DisplayName(
+      "mean height of two heights whose sum exceeds the largest double (IEEE 754): still their"
+          + " mean, (a + b) / 2, not an overflow")
+  void meanOfVeryLargeHeights() {
+    double start = 1.7e308;
+    double end = 1.5e308;
+    assertThat(DrainagePathRule.MEAN_HEIGHT.drainagePath(Drainage.SINGLE, start, start, end))
+        .isEqualTo(1.6e308);
+    assertThat(DrainagePathRule.MEAN_HEIGHT.drainagePath(Drainage.DOUBLE, start, start, end))
+        .isEqualTo(0.8e308);
+  }
 }

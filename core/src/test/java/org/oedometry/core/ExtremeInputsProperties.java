@@ -40,8 +40,9 @@ import org.quicktheories.generators.Generate;
 
 /**
  * The rule "no NaN or infinity ever leaves the library; bad input gets an IllegalArgumentException
- * naming the field, the index and the value", checked on {@link SettlementCurve} and on the entry
- * points of the compressibility package with valid but extreme per-increment values.
+ * naming the field, the index and the value", checked on {@link SettlementCurve}, on {@link
+ * OedometerTest} with {@link DrainagePathRule}, and on the entry points of the compressibility
+ * package with valid but extreme per-increment values.
  *
  * <p>Settlement curves: exact Terzaghi curves from {@link ConsolidationCurveModel} of the theory
  * module (its accuracy is proven against mpmath there), used as an independent generator, with time
@@ -231,6 +232,102 @@ class ExtremeInputsProperties {
                   .as("%s, kind %d at %d", r, kind, index)
                   .isInstanceOf(IllegalArgumentException.class)
                   .hasMessageContaining("index " + index + " (" + value);
+            });
+  }
+
+  // ---------------------------------------------------------------------------------------------
+  // OedometerTest and DrainagePathRule
+
+  /**
+   * One generated test: the initial height 10<sup>log10Height</sup> m, the height of solids
+   * 10<sup>-log10HeightOverSolids</sup> times it, and per increment an extreme Terzaghi curve whose
+   * settlement is scaled to the specimen height (swelling to a few times the height included).
+   */
+  record WholeTest(int count, double log10Height, double log10HeightOverSolids, long seed) {
+
+    OedometerTest build() {
+      SplittableRandom random = new SplittableRandom(seed);
+      double height = Math.pow(10, log10Height);
+      double solids = height * Math.pow(10, -Math.max(1e-12, log10HeightOverSolids));
+      double area = solids > 1 ? 1e-6 : 1.0;
+      Specimen.Builder specimen = Specimen.builder().initialHeight(height).specificGravity(2.5);
+      specimen.area(area);
+      if (random.nextBoolean()) {
+        specimen.dryMass(solids * area * 2.5 * Specimen.WATER_DENSITY);
+      } else {
+        specimen.finalWaterContent(0.4); // e_f = 1: H_s is half the final height
+      }
+      List<LoadIncrement> increments = new ArrayList<>();
+      double stress = 0;
+      for (int i = 0; i < count; i++) {
+        Readings r =
+            new Readings(
+                2 + random.nextInt(30),
+                -200 + 400 * random.nextDouble(),
+                Math.min(307, log10Height - 4 + 4.6 * random.nextDouble()),
+                random.nextLong());
+        double[] t = r.times();
+        double next = stress == 0 || random.nextBoolean() ? stress * 2 + 1e3 : stress / 2;
+        increments.add(LoadIncrement.of(stress, next, SettlementCurve.of(t, r.settlements(t))));
+        stress = next;
+      }
+      return OedometerTest.of(specimen.build(), increments);
+    }
+
+    @Override
+    public String toString() {
+      return String.format(
+          Locale.ROOT,
+          "WholeTest[%d, height 1e%.3f m, height over solids 1e%.3f, seed %d]",
+          count,
+          log10Height,
+          log10HeightOverSolids,
+          seed);
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "OedometerTest on extreme heights, solids and swelling or settling curves: refused with a"
+          + " clean IllegalArgumentException, or every accessor (heights, void ratios per"
+          + " increment, every drainage path rule) finite and none throws on a valid index")
+  void oedometerTestAccessorsStayFinite() {
+    qt().withFixedSeed(20261226L)
+        .withExamples(400)
+        .forAll(
+            integers().between(1, 6),
+            wideExponents(),
+            doubles().between(-12, 400).mix(Generate.pick(List.of(307.5, 308.0, 308.2, 0.001)), 20),
+            longs().all())
+        .as(WholeTest::new)
+        .checkAssert(
+            w -> {
+              OedometerTest test;
+              try {
+                test = w.build();
+              } catch (IllegalArgumentException e) {
+                assertThat(e.getMessage())
+                    .as("%s: %s", w, e)
+                    .doesNotContain("NaN")
+                    .doesNotContain("Infinity");
+                return;
+              }
+              assertThat(notFinite(test)).as("%s", w).isEmpty();
+              for (int i = 0; i < test.increments().size(); i++) {
+                double start = test.heightAtStartMetres(i);
+                double end = test.heightAtEndMetres(i);
+                assertThat(List.of(start, end, test.voidRatioAtEnd(i)))
+                    .as("%s, increment %d", w, i)
+                    .allMatch(v -> Double.isFinite(v) && v > 0);
+                for (DrainagePathRule rule : DrainagePathRule.values()) {
+                  for (org.oedometry.theory.Drainage drainage :
+                      org.oedometry.theory.Drainage.values()) {
+                    double path =
+                        rule.drainagePath(drainage, start, Math.min(start, end) + 0.0, end);
+                    assertThat(path).as("%s, %s %s, increment %d", w, rule, drainage, i).isFinite();
+                  }
+                }
+              }
             });
   }
 

@@ -77,4 +77,23 @@ class GaugeConversionTest {
     assertThatThrownBy(() -> g.curves(5, List.of(), List.of()))
         .hasMessageStartingWith("need the same number (> 0) of time arrays (0)");
   }
+
+  @Test
+  @DisplayName(
+      "gauge travel or a corrected settlement beyond the largest double (IEEE 754) is refused"
+          + " with the readings named, not as an infinite value")
+  void travelBeyondTheDoubleRange() {
+    GaugeConversion g =
+        GaugeConversion.of(LabUnit.METRE, GaugeDirection.INCREASES_WITH_COMPRESSION);
+    assertThatThrownBy(() -> g.travelMetres(1e308, -1e308))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "gauge travel from the reference reading (-1.0E308 m) to the reading (1.0E308 m) is"
+                + " beyond the range of a double");
+    assertThatThrownBy(() -> g.curve(new double[] {0, 60}, new double[] {0, 1e308}, 0, -1e308))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "gauge reading at index 1 (1.0E308 m) less the apparatus deflection (-1.0E308 m) is"
+                + " beyond the range of a double");
+  }
 }

@@ -3,6 +3,7 @@ package org.oedometry.core;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
+import static org.assertj.core.api.Assertions.withinPercentage;
 
 import java.util.List;
 import org.junit.jupiter.api.DisplayName;
@@ -185,5 +186,51 @@ class OedometerTestTest {
             .addIncrement(LoadIncrement.of(0, 50e3, curve(0.0005)))
             .build();
     assertThat(c.increments()).hasSize(1);
+  }
+
+  @Test
+  @DisplayName(
+      "swelling readings whose heights add up beyond the largest double (about 1.8e308, IEEE 754)"
+          + " are refused with the reading named, not kept as an infinite height")
+  void heightsBeyondTheDoubleRange() {
+    // Each increment swells by 1e308 m: H_1 = 0.02 + 1e308 = 1e308, then 1e308 + 1e308 overflows.
+    SettlementCurve swelling =
+        SettlementCurve.of(new double[] {60, 120}, new double[] {-1e307, -1e308});
+    List<LoadIncrement> increments =
+        List.of(
+            LoadIncrement.of(0, 50e3, swelling),
+            LoadIncrement.of(50e3, 25e3, swelling),
+            LoadIncrement.of(25e3, 12.5e3, curve(0.001)));
+    assertThatThrownBy(() -> OedometerTest.of(SpecimenTest.example(), increments))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "settlement at reading 1 of the increment at index 1 (-1.0E308 m) takes the specimen"
+                + " height (1.0E308 m at the start of the increment) beyond the range of a"
+                + " double");
+  }
+
+  @Test
+  @DisplayName(
+      "a height whose void ratio H / H_s - 1 would exceed the largest double is refused when the"
+          + " test is built, so voidRatioAtEnd never throws for a valid index; just below, e ="
+          + " e0 - (1 + e0) dH / H0 (FACTS.md) agrees")
+  void voidRatiosBeyondTheDoubleRange() {
+    // H_s = 10.0602 mm (SpecimenTest, by hand): a height of 1e307 m gives e of about 1e309.
+    SettlementCurve tooFar = SettlementCurve.of(new double[] {60, 120}, new double[] {0, -1e307});
+    assertThatThrownBy(
+            () ->
+                OedometerTest.of(SpecimenTest.example(), List.of(LoadIncrement.of(0, 5e3, tooFar))))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageStartingWith(
+            "specimen height at reading 1 of the increment at index 0 (1.0E307 m) is too large"
+                + " for a void ratio");
+    SettlementCurve far = SettlementCurve.of(new double[] {60, 120}, new double[] {0, -1e305});
+    OedometerTest t =
+        OedometerTest.of(SpecimenTest.example(), List.of(LoadIncrement.of(0, 5e3, far)));
+    double e0 = t.initialVoidRatio();
+    assertThat(t.voidRatioAtEnd(0))
+        .isFinite()
+        .isCloseTo(e0 - (1 + e0) * -1e305 / 0.020, withinPercentage(1e-10));
+    assertThat(FiniteResults.notFinite(t)).isEmpty();
   }
 }

@@ -141,4 +141,32 @@ class SpecimenTest {
     assertThat(a.toString())
         .isEqualTo("Specimen[H0 0.02 m, D 0.075 m, Gs 2.7, dry mass 0.12 kg, initial w 0.36]");
   }
+
+  @Test
+  @DisplayName(
+      "values the library derives beyond the double range (area, H_s, e0 from density) are"
+          + " refused naming the input, never quoting Infinity (project rule: no infinity leaves"
+          + " the library, messages included)")
+  void derivedValuesBeyondTheDoubleRange() {
+    // pi (1e200)^2 / 4 overflows; 0.05 kg over 2700 kg/m^3 x 4.9e-324 m^2 overflows;
+    // G_s rho_w (1 + w0) / rho with rho = 1e-310 kg/m^3 overflows (IEEE 754 double range).
+    assertThatThrownBy(() -> example().toBuilder().diameter(1e200).build())
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "diameter (1.0E200 m) gives an area pi D^2 / 4 outside the range of a positive double");
+    assertThatThrownBy(
+            () ->
+                Specimen.builder()
+                    .initialHeight(0.02)
+                    .area(Double.MIN_VALUE)
+                    .specificGravity(2.7)
+                    .dryMass(0.05)
+                    .build())
+        .hasMessageStartingWith("dry mass (0.05 kg) over G_s rho_w A")
+        .hasMessageEndingWith("gives a height of solids beyond the range of a double");
+    assertThatThrownBy(() -> example().toBuilder().bulkDensity(1e-310).build())
+        .hasMessage(
+            "bulk density (1.0E-310 kg/m^3) with initial water content 0.36 and specific gravity"
+                + " 2.7 gives a void ratio beyond the range of a double, not finite and > 0");
+  }
 }

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import org.oedometry.core.OedometerTest;
+import org.oedometry.core.io.CsvTables;
 import org.oedometry.core.io.OedometerTestCsvReader;
 import org.oedometry.core.io.TestDataException;
 import org.oedometry.examples.demo.DemoTestGenerator;
@@ -71,8 +72,9 @@ public final class Demo {
    * @param args optional: the output folder (default examples/target/demo), then the folder of a
    *     test to reduce instead of the demo test
    * @param out where the report is printed
-   * @param err where a bad input file is explained
-   * @return 0 on success, 2 for a bad or unreadable input test, 3 if an output cannot be written
+   * @param err where a bad input file is explained, naming the file
+   * @return 0 on success, 2 for a bad or unreadable input test (also when one of its three files is
+   *     missing or is a folder), 3 if an output cannot be written
    */
   static int run(String[] args, PrintStream out, PrintStream err) {
     Path folder = Path.of(args.length > 0 ? args[0] : "examples/target/demo");
@@ -80,6 +82,18 @@ public final class Demo {
     String name;
     if (args.length > 1) {
       Path input = Path.of(args[1]);
+      for (String file :
+          List.of(CsvTables.PROPERTIES_FILE, CsvTables.INCREMENTS_FILE, CsvTables.READINGS_FILE)) {
+        if (!Files.isRegularFile(input.resolve(file))) {
+          err.println(
+              "The test in "
+                  + input
+                  + " cannot be read: "
+                  + input.resolve(file)
+                  + " is not a file (missing, or a folder)");
+          return 2;
+        }
+      }
       try {
         test = OedometerTestCsvReader.read(input);
       } catch (TestDataException e) {

@@ -109,4 +109,58 @@ class DemoTest {
     assertThat(err.toString(StandardCharsets.UTF_8))
         .startsWith("The test in " + input + " cannot be read: ");
   }
+
+  @Test
+  @DisplayName(
+      "A user's test folder whose properties.csv is a folder: exit code 2 and a message naming"
+          + " that file (Demo.run documents both)")
+  void inputFileThatIsAFolder(@TempDir Path folder) throws IOException {
+    Path input = Files.createDirectories(folder.resolve("mine"));
+    Files.createDirectories(input.resolve("properties.csv"));
+    Files.writeString(input.resolve("increments.csv"), "increment\n");
+    Files.writeString(input.resolve("readings.csv"), "increment\n");
+    ByteArrayOutputStream err = new ByteArrayOutputStream();
+    int code =
+        Demo.run(
+            new String[] {folder.resolve("out").toString(), input.toString()},
+            new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8),
+            new PrintStream(err, true, StandardCharsets.UTF_8));
+    assertThat(code).isEqualTo(2);
+    assertThat(err.toString(StandardCharsets.UTF_8))
+        .contains(input.resolve("properties.csv").toString());
+  }
+
+  @Test
+  @DisplayName(
+      "A user's test folder that does not exist, or a file given instead of the folder: exit"
+          + " code 2, the missing file named")
+  void missingInput(@TempDir Path folder) throws IOException {
+    Path plainFile = Files.writeString(folder.resolve("a-file.csv"), "property,value\n");
+    for (Path input : new Path[] {folder.resolve("no-such-folder"), plainFile}) {
+      ByteArrayOutputStream err = new ByteArrayOutputStream();
+      int code =
+          Demo.run(
+              new String[] {folder.resolve("out").toString(), input.toString()},
+              new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8),
+              new PrintStream(err, true, StandardCharsets.UTF_8));
+      assertThat(code).isEqualTo(2);
+      assertThat(err.toString(StandardCharsets.UTF_8))
+          .startsWith("The test in " + input + " cannot be read: ")
+          .contains(input.resolve("properties.csv").toString());
+    }
+  }
+
+  @Test
+  @DisplayName("An output folder that cannot be created (a file is in the way): exit code 3")
+  void outputNotWritable(@TempDir Path folder) throws IOException {
+    Path blocker = Files.writeString(folder.resolve("blocker"), "x");
+    ByteArrayOutputStream err = new ByteArrayOutputStream();
+    int code =
+        Demo.run(
+            new String[] {blocker.resolve("out").toString()},
+            new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8),
+            new PrintStream(err, true, StandardCharsets.UTF_8));
+    assertThat(code).isEqualTo(3);
+    assertThat(err.toString(StandardCharsets.UTF_8)).startsWith("Cannot write the results to ");
+  }
 }

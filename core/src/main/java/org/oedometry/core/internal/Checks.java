@@ -116,13 +116,18 @@ public final class Checks {
   }
 
   /**
-   * Requires text without control characters (line breaks, tabs and the like), and returns it with
-   * surrounding white space removed.
+   * Requires text that stays on one line and reads in its own order, and returns it with
+   * surrounding white space removed. Rejected: control characters (U+0000 to U+001F, U+007F to
+   * U+009F: line breaks, tabs and the like), the Unicode line and paragraph separators (U+2028,
+   * U+2029), which many programs show as a line break, the bidirectional formatting controls
+   * (U+061C, U+200E, U+200F, U+202A to U+202E, U+2066 to U+2069), which reorder the text after them
+   * up to the end of the line, and unpaired surrogates, which no file encoding can carry.
    *
    * @param text the text; not null
    * @param name what the text is, for the message
    * @return the stripped text
-   * @throws IllegalArgumentException if the text contains a control character
+   * @throws IllegalArgumentException if the text contains one of the characters above; the message
+   *     names the character's code and its index
    * @throws NullPointerException if the text is null
    */
   public static String plainText(String text, String name) {
@@ -130,14 +135,36 @@ public final class Checks {
       throw new NullPointerException(name + " must not be null");
     }
     for (int i = 0; i < text.length(); i++) {
-      if (Character.isISOControl(text.charAt(i))) {
+      char c = text.charAt(i);
+      String what = null;
+      if (Character.isISOControl(c)) {
+        what = "a control character";
+      } else if (c == 0x2028 || c == 0x2029) {
+        what = "a line or paragraph separator";
+      } else if (isBidiControl(c)) {
+        what = "a bidirectional formatting control";
+      } else if (Character.isHighSurrogate(c)
+          && i + 1 < text.length()
+          && Character.isLowSurrogate(text.charAt(i + 1))) {
+        i++; // a well-formed pair: one supplementary character
+      } else if (Character.isSurrogate(c)) {
+        what = "an unpaired surrogate";
+      }
+      if (what != null) {
         throw new IllegalArgumentException(
-            format(
-                "%s contains a control character (U+%04X) at index %d",
-                name, (int) text.charAt(i), i));
+            format("%s contains %s (U+%04X) at index %d", name, what, (int) c, i));
       }
     }
     return text.strip();
+  }
+
+  /** The characters of the Unicode property Bidi_Control (Unicode 15, from memory). */
+  private static boolean isBidiControl(char c) {
+    return c == 0x061C
+        || c == 0x200E
+        || c == 0x200F
+        || (c >= 0x202A && c <= 0x202E)
+        || (c >= 0x2066 && c <= 0x2069);
   }
 
   /** Smallest specific gravity of solids, exclusive: solids no denser than water. */

@@ -35,6 +35,12 @@ public final class ChartFiles {
   /** Height of every PNG written, pixels. */
   public static final int HEIGHT = 600;
 
+  /**
+   * Smallest span of a void ratio axis: points that all share one void ratio (readings that never
+   * move) would otherwise get a span of 10<sup>-8</sup> whose tick labels all read the same.
+   */
+  static final double VOID_RATIO_MINIMUM_RANGE = 1e-3;
+
   /** Seconds in one minute, the time unit of the laboratory charts. */
   static final double SECONDS_PER_MINUTE = 60.0;
 
@@ -56,6 +62,38 @@ public final class ChartFiles {
   static final Color MARKS = new Color(110, 110, 110);
 
   private ChartFiles() {}
+
+  /** Tick labels: {@code 0.###} from 0.001 to a million, {@code 0.###E0} outside (and for 0). */
+  static final class PlainOrScientific extends java.text.NumberFormat {
+
+    private static final long serialVersionUID = 1L;
+
+    private final java.text.DecimalFormat plain =
+        new java.text.DecimalFormat(
+            "0.###", java.text.DecimalFormatSymbols.getInstance(Locale.ROOT));
+
+    private final java.text.DecimalFormat scientific =
+        new java.text.DecimalFormat(
+            "0.###E0", java.text.DecimalFormatSymbols.getInstance(Locale.ROOT));
+
+    @Override
+    public StringBuffer format(
+        double number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
+      double size = Math.abs(number);
+      boolean usePlain = size >= 1e-3 && size < 1e6;
+      return (usePlain ? plain : scientific).format(number, toAppendTo, pos);
+    }
+
+    @Override
+    public StringBuffer format(long number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
+      return format((double) number, toAppendTo, pos);
+    }
+
+    @Override
+    public Number parse(String source, java.text.ParsePosition parsePosition) {
+      return scientific.parse(source, parsePosition);
+    }
+  }
 
   /**
    * Writes a chart as a PNG of {@value #WIDTH} by {@value #HEIGHT} pixels, creating the parent
@@ -89,8 +127,45 @@ public final class ChartFiles {
     System.setProperty("java.awt.headless", "true");
   }
 
-  /** The common look: white background, light grid, plain fonts, a subtitle if given. */
+  /**
+   * Longest title shown, characters: a longer title is cut there and ends with an ellipsis
+   * (JFreeChart breaks a long word into lines one character at a time, so a title of tens of
+   * thousands of characters takes minutes to draw and leaves no room for the plot).
+   */
+  public static final int TITLE_LENGTH = 200;
+
+  /**
+   * The title as shown: on one line (line breaks and other control characters, and the Unicode line
+   * and paragraph separators, each become a space) and at most {@value #TITLE_LENGTH} characters
+   * (cut with an ellipsis, never inside a surrogate pair).
+   *
+   * @param title the title; not null
+   * @return the title shown
+   */
+  static String oneLineTitle(String title) {
+    StringBuilder out = new StringBuilder(Math.min(title.length(), TITLE_LENGTH));
+    for (int i = 0; i < title.length(); i++) {
+      char c = title.charAt(i);
+      boolean breaks = Character.isISOControl(c) || c == '\u2028' || c == '\u2029';
+      out.append(breaks ? ' ' : c);
+    }
+    if (out.length() > TITLE_LENGTH) {
+      int end = TITLE_LENGTH - 1;
+      if (Character.isHighSurrogate(out.charAt(end - 1))) {
+        end--;
+      }
+      out.setLength(end);
+      out.append('\u2026');
+    }
+    return out.toString();
+  }
+
+  /**
+   * The common look: white background, light grid, plain fonts, the title on one line and at most
+   * {@value #TITLE_LENGTH} characters ({@link #oneLineTitle}), a subtitle if given.
+   */
   static JFreeChart finish(JFreeChart chart, String subtitle) {
+    chart.setTitle(oneLineTitle(chart.getTitle().getText()));
     chart.setBackgroundPaint(Color.WHITE);
     chart.getTitle().setFont(new Font(Font.SANS_SERIF, Font.BOLD, 16));
     if (subtitle != null && !subtitle.isBlank()) {
@@ -115,12 +190,16 @@ public final class ChartFiles {
     plot.setOutlinePaint(Color.GRAY);
   }
 
-  /** A log axis with plain decimal tick labels. */
+  /**
+   * A log axis with plain decimal tick labels ({@code 0.###}) from 0.001 up to a million, and
+   * scientific ones ({@code 0.###E0}) outside that span, so that no label reads 0 or runs to
+   * hundreds of digits.
+   */
   static LogAxis logAxis(String label) {
     LogAxis axis = new LogAxis(label);
     axis.setBase(10);
     axis.setSmallestValue(1e-30);
-    axis.setNumberFormatOverride(new java.text.DecimalFormat("0.###"));
+    axis.setNumberFormatOverride(new PlainOrScientific());
     axis.setMinorTickMarksVisible(true);
     axis.setAutoRangeMinimumSize(Double.MIN_NORMAL);
     return axis;
@@ -140,14 +219,30 @@ public final class ChartFiles {
   /**
    * Round tick values on a log axis over data from min to max (both &gt; 0): one tick a decade (1,
    * 10, 100, ...) when the data span at least 1.5 decades, else ticks at powers of 2 (1, 2, 4, 8,
-   * ...). The range is set to the data with a margin of a factor of 1.25 either side.
+   * ...). The range is set to the data with a margin of a factor of 1.25 either side; with powers
+   * of 2 it is widened further, where needed, to a factor of 1.05 beyond the power of 2 at or below
+   * min and the one at or above max, so that at least two ticks are labelled even when the data
+   * span less than a factor of 2.
    */
   static void logTicks(LogAxis axis, double min, double max) {
     double span = Math.log10(max / min);
-    double unit = span >= 1.5 ? 1.0 : Math.log10(2.0);
+    boolean decades = span >= 1.5;
+    double unit = decades ? 1.0 : Math.log10(2.0);
     axis.setTickUnit(new NumberTickUnit(unit), false, false);
     axis.setAutoTickUnitSelection(false, false);
-    axis.setRange(min / 1.25, max * 1.25);
+    double lower = min / 1.25;
+    double upper = max * 1.25;
+    if (!decades) {
+      double below = Math.pow(2, Math.floor(Math.log(min) / Math.log(2)));
+      double above = Math.pow(2, Math.ceil(Math.log(max) / Math.log(2)));
+      if (below > 0) {
+        lower = Math.min(lower, below / 1.05);
+      }
+      if (above < Double.POSITIVE_INFINITY) {
+        upper = Math.max(upper, above * 1.05);
+      }
+    }
+    axis.setRange(lower, upper);
   }
 
   /** A settlement axis, increasing downward. */

@@ -1,5 +1,6 @@
 package org.oedometry.examples.plots;
 
+import static org.oedometry.examples.plots.ChartFiles.VOID_RATIO_MINIMUM_RANGE;
 import static org.oedometry.examples.plots.ChartFiles.format;
 
 import java.awt.Color;
@@ -47,7 +48,8 @@ public final class CompressionChart {
    * @param curve the compression curve (stresses Pa, void ratios); not null
    * @param estimates the preconsolidation constructions on that curve, in the order to draw; not
    *     null, no null element (may be empty)
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @return the chart
    * @throws IllegalArgumentException if an argument or element is null
    */
@@ -107,6 +109,7 @@ public final class CompressionChart {
     }
     NumberAxis voidRatio = new NumberAxis("Void ratio e (-)");
     voidRatio.setAutoRangeIncludesZero(false);
+    voidRatio.setAutoRangeMinimumSize(VOID_RATIO_MINIMUM_RANGE);
     LogAxis stressAxis = ChartFiles.logAxis("Vertical effective stress σ' (kPa), log scale");
     ChartFiles.logTicks(
         stressAxis, marks.getDomainLowerBound(false), marks.getDomainUpperBound(false));
@@ -127,7 +130,8 @@ public final class CompressionChart {
    *
    * @param curve the compression curve; not null
    * @param estimates the preconsolidation constructions; not null, no null element
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @param file where to write; not null
    * @return the file written
    * @throws IllegalArgumentException if an argument or element is null

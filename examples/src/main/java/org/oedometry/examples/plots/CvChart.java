@@ -32,7 +32,8 @@ public final class CvChart {
    * Builds the chart.
    *
    * @param points the points to draw; not null, no null element, at least one
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @return the chart
    * @throws IllegalArgumentException if an argument or element is null, or there is no point
    */
@@ -114,7 +115,8 @@ public final class CvChart {
    * ChartFiles#HEIGHT} pixels.
    *
    * @param points the points; not null, no null element, at least one
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @param file where to write; not null
    * @return the file written
    * @throws IllegalArgumentException if an argument or element is null, or there is no point

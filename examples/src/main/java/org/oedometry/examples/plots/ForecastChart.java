@@ -29,7 +29,8 @@ public final class ForecastChart {
    *
    * @param layer the clay layer; not null
    * @param horizonSeconds the time the chart ends at, s; finite, &gt; 0
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @return the chart
    * @throws IllegalArgumentException if an argument is null or the horizon is not finite and
    *     positive
@@ -92,7 +93,8 @@ public final class ForecastChart {
    *
    * @param layer the clay layer; not null
    * @param horizonSeconds the time the chart ends at, s; finite, &gt; 0
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @param file where to write; not null
    * @return the file written
    * @throws IllegalArgumentException if an argument is null or the horizon is out of range

@@ -36,7 +36,8 @@ public final class FullCurveChart {
    * @param curve the increment's readings (time s, settlement m); not null
    * @param result the fit of those readings; its residuals belong, in order, to the readings after
    *     t = 0; not null
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @return the chart
    * @throws IllegalArgumentException if an argument is null, or the residuals do not match the
    *     readings after t = 0 in number
@@ -128,7 +129,8 @@ public final class FullCurveChart {
    *
    * @param curve the increment's readings; not null
    * @param result the fit of those readings; not null
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @param file where to write; not null
    * @return the file written
    * @throws IllegalArgumentException if an argument is null or the residuals do not match

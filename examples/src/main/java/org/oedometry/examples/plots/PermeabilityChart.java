@@ -1,5 +1,6 @@
 package org.oedometry.examples.plots;
 
+import static org.oedometry.examples.plots.ChartFiles.VOID_RATIO_MINIMUM_RANGE;
 import static org.oedometry.examples.plots.ChartFiles.format;
 
 import java.nio.file.Path;
@@ -31,7 +32,8 @@ public final class PermeabilityChart {
    *     org.oedometry.core.compressibility.Permeability}; not null, no null element, at least one
    * @param fit the C<sub>k</sub> fit, or its absence with the reason (shown in the subtitle); not
    *     null
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @return the chart
    * @throws IllegalArgumentException if an argument or element is null, or there is no increment
    */
@@ -94,6 +96,7 @@ public final class PermeabilityChart {
     renderer.setSeriesStroke(2, ChartFiles.solid(1.8f));
     NumberAxis voidRatio = new NumberAxis("Mean void ratio of the increment e (-)");
     voidRatio.setAutoRangeIncludesZero(false);
+    voidRatio.setAutoRangeMinimumSize(VOID_RATIO_MINIMUM_RANGE);
     LogAxis kAxis = ChartFiles.scientificLogAxis("Hydraulic conductivity k (m/s), log scale");
     ChartFiles.logTicks(kAxis, data.getDomainLowerBound(false), data.getDomainUpperBound(false));
     XYPlot plot = new XYPlot(data, kAxis, voidRatio, renderer);
@@ -108,7 +111,8 @@ public final class PermeabilityChart {
    *
    * @param increments k of each increment; not null, no null element, at least one
    * @param fit the C<sub>k</sub> fit or its absence; not null
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @param file where to write; not null
    * @return the file written
    * @throws IllegalArgumentException if an argument or element is null, or there is no increment

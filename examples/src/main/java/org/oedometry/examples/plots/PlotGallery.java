@@ -71,11 +71,14 @@ public final class PlotGallery {
   /**
    * Reduces a test and writes all its charts into a folder: per increment {@code
    * increment-NN-log-time.png}, {@code -root-time.png}, {@code -full-curve.png} (NN from 01; a
-   * chart whose method failed on that increment is left out), then {@code compression.png}, {@code
-   * cv.png}, {@code permeability.png} and {@code forecast.png}.
+   * chart whose method failed on that increment is left out), then {@code compression.png} (left
+   * out when the test has no compression curve, as when its first increment unloads), {@code
+   * cv.png}, {@code permeability.png} (each left out when it would have no point) and {@code
+   * forecast.png}.
    *
    * @param test the test; not null
-   * @param name what to call the test in chart titles; not null
+   * @param name what to call the test in chart titles (shown on one line, cut with the rest of the
+   *     title at {@value ChartFiles#TITLE_LENGTH} characters); not null
    * @param folder the output folder (created if needed); not null
    * @return the files written, in the order above
    * @throws IllegalArgumentException if an argument is null
@@ -94,9 +97,10 @@ public final class PlotGallery {
    *
    * @param test the test; not null
    * @param report its reduction; not null
-   * @param name what to call the test in chart titles; not null
+   * @param name what to call the test in chart titles (shown on one line, cut with the rest of the
+   *     title at {@value ChartFiles#TITLE_LENGTH} characters); not null
    * @param folder the output folder (created if needed); not null
-   * @return the files written
+   * @return the files written, as {@link #write(OedometerTest, String, Path)} describes
    * @throws IllegalArgumentException if an argument is null
    * @throws java.io.UncheckedIOException if a file cannot be written
    */
@@ -138,14 +142,16 @@ public final class PlotGallery {
                       FullCurveChart.write(
                           curve, r, title, folder.resolve(stem + "full-curve.png"))));
     }
-    CompressionCurve curve =
-        report.compressionCurve().value().orElseGet(() -> CompressionCurve.fromTest(test));
-    written.add(
-        CompressionChart.write(
-            curve,
-            report.preconsolidation(),
-            name + ": void ratio against effective stress",
-            folder.resolve("compression.png")));
+    Optional<CompressionCurve> curve =
+        report.compressionCurve().value().or(() -> endOfIncrementCurve(test));
+    curve.ifPresent(
+        c ->
+            written.add(
+                CompressionChart.write(
+                    c,
+                    report.preconsolidation(),
+                    name + ": void ratio against effective stress",
+                    folder.resolve("compression.png"))));
     List<CvPoint> cvPoints = new ArrayList<>();
     List<IncrementPermeability> permeability = new ArrayList<>();
     List<IncrementPermeability> normallyConsolidated = new ArrayList<>();
@@ -202,6 +208,18 @@ public final class PlotGallery {
         WorkMethod.estimate(curve),
         BilinearVolumeMethod.butterfield(curve),
         BilinearVolumeMethod.onitsuka(curve));
+  }
+
+  /**
+   * The end-of-increment compression curve, or none where the test does not admit one (its first
+   * increment unloads, so no point lies above the seating stress).
+   */
+  private static Optional<CompressionCurve> endOfIncrementCurve(OedometerTest test) {
+    try {
+      return Optional.of(CompressionCurve.fromTest(test));
+    } catch (IllegalArgumentException e) {
+      return Optional.empty();
+    }
   }
 
   /** The full-curve fit of an increment, if the report has one. */

@@ -38,7 +38,8 @@ public final class RootTimeChart {
    *
    * @param curve the increment's readings (time s, settlement m); not null
    * @param result the construction on those readings; not null
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @return the chart
    * @throws IllegalArgumentException if an argument is null
    */
@@ -123,7 +124,8 @@ public final class RootTimeChart {
    *
    * @param curve the increment's readings; not null
    * @param result the construction on those readings; not null
-   * @param title the chart's title; not null
+   * @param title the chart's title (shown on one line, cut at {@value ChartFiles#TITLE_LENGTH}
+   *     characters); not null
    * @param file where to write; not null
    * @return the file written
    * @throws IllegalArgumentException if an argument is null

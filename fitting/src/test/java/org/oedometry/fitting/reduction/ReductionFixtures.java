@@ -80,14 +80,14 @@ final class ReductionFixtures {
 
   /**
    * Labels that a writer must escape: quotes, commas, a backslash, a semicolon, non-ASCII letters,
-   * a character outside the Basic Multilingual Plane, U+2028 (a line separator to JavaScript but
-   * not a control character, so {@link TestIdentifiers} accepts it), a 20 000-character sample
+   * a character outside the Basic Multilingual Plane, a no-break space and a zero-width joiner
+   * (which {@link TestIdentifiers} accepts; it refuses U+2028), a 20 000-character sample
    * reference, and a depth whose leading number (401 digits) lies beyond the double range.
    */
   static TestIdentifiers hostileIdentifiers() {
     return TestIdentifiers.of(
         "Invented \"quoted\", project; C:\\data\\x \u00e9t\u00e9 \u65e5\u672c \ud83d\ude00",
-        "BH,\"1\"\u2028b",
+        "BH,\"1\"\u00a0b\u200d",
         "S".repeat(20_000),
         "1" + "0".repeat(400) + ".005 m, \"top\"");
   }
