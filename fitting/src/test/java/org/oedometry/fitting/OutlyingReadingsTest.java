@@ -36,6 +36,40 @@ class OutlyingReadingsTest {
       ConsolidationCurveModel.Curve curve,
       double[][] jacobian) {}
 
+  /**
+   * Readings whose externally studentized residual, computed for every reading, exceeds the 1 %
+   * Bonferroni bound (Cook &amp; Weisberg 1982, ch. 2): what the screen must find.
+   */
+  private static List<Integer> everyReadingOutlying(double[] t, double[] w, Fitted f) {
+    int n = t.length;
+    double bound =
+        FullCurveMethod.studentQuantile(
+            1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
+    double[] every =
+        FullCurveMethod.studentizedResiduals(
+            t, f.solution().residuals(), w, f.curve(), f.solution(), 4);
+    List<Integer> expected = new ArrayList<>();
+    for (int i = 0; i < n; i++) {
+      if (Math.abs(every[i]) > bound) {
+        expected.add(i);
+      }
+    }
+    return expected;
+  }
+
+  /** The indices the fit's own (screened, above 400 readings) outlier check names. */
+  private static List<Integer> screenedOutlying(double[] t, double[] w, Fitted f) {
+    double[] residuals = f.solution().residuals();
+    double sumSquares = 0;
+    for (double r : residuals) {
+      sumSquares += r * r;
+    }
+    return FullCurveMethod.outlyingReadings(t, residuals, sumSquares, w, f.curve(), f.solution(), 4)
+        .stream()
+        .map(row -> (int) row[0])
+        .toList();
+  }
+
   private static Fitted fit(double[] t, double[] y, double[] weights) {
     ConsolidationCurveModel model = ConsolidationCurveModel.of(H);
     WeightedLeastSquares.Model m =
@@ -158,27 +192,8 @@ class OutlyingReadingsTest {
       }
       double[] w = FullCurveMethod.weights(t, FullCurveOptions.ReadingWeights.LOG_TIME_BALANCE);
       Fitted f = fit(t, y, w);
-      double[] residuals = f.solution().residuals();
-      double sumSquares = 0;
-      for (double r : residuals) {
-        sumSquares += r * r;
-      }
-      double bound =
-          FullCurveMethod.studentQuantile(
-              1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
-      double[] every =
-          FullCurveMethod.studentizedResiduals(t, residuals, w, f.curve(), f.solution(), 4);
-      List<Integer> expected = new ArrayList<>();
-      for (int i = 0; i < n; i++) {
-        if (Math.abs(every[i]) > bound) {
-          expected.add(i);
-        }
-      }
-      List<Integer> screened =
-          FullCurveMethod.outlyingReadings(t, residuals, sumSquares, w, f.curve(), f.solution(), 4)
-              .stream()
-              .map(row -> (int) row[0])
-              .toList();
+      List<Integer> expected = everyReadingOutlying(t, w, f);
+      List<Integer> screened = screenedOutlying(t, w, f);
       assertThat(n).isGreaterThan(FullCurveMethod.GROUPING_LIMIT);
       assertThat(screened).as("trial %d (%d readings)", trial, n).isEqualTo(expected);
       assertThat(expected).as("trial %d finds the wild readings", trial).isNotEmpty();
@@ -215,28 +230,8 @@ class OutlyingReadingsTest {
           y[wild] += (random.nextBoolean() ? 1 : -1) * random.nextDouble(3e-6, 30e-6);
           double[] w = FullCurveMethod.weights(t, kind);
           Fitted f = fit(t, y, w);
-          double[] residuals = f.solution().residuals();
-          double sumSquares = 0;
-          for (double r : residuals) {
-            sumSquares += r * r;
-          }
-          double bound =
-              FullCurveMethod.studentQuantile(
-                  1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
-          double[] every =
-              FullCurveMethod.studentizedResiduals(t, residuals, w, f.curve(), f.solution(), 4);
-          List<Integer> expected = new ArrayList<>();
-          for (int i = 0; i < n; i++) {
-            if (Math.abs(every[i]) > bound) {
-              expected.add(i);
-            }
-          }
-          List<Integer> screened =
-              FullCurveMethod.outlyingReadings(
-                      t, residuals, sumSquares, w, f.curve(), f.solution(), 4)
-                  .stream()
-                  .map(row -> (int) row[0])
-                  .toList();
+          List<Integer> expected = everyReadingOutlying(t, w, f);
+          List<Integer> screened = screenedOutlying(t, w, f);
           assertThat(screened)
               .as("%s weights, %d lone readings, trial %d", kind, lone, trial)
               .isEqualTo(expected);

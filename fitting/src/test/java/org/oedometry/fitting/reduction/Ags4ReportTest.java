@@ -10,14 +10,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
-import java.util.stream.Stream;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.oedometry.core.compressibility.IncrementCompressibility;
 import org.oedometry.core.compressibility.PreconsolidationMethod;
@@ -184,22 +182,8 @@ class Ags4ReportTest {
     return groups;
   }
 
-  static Stream<Arguments> unusualReports() {
-    List<Arguments> out = new ArrayList<>();
-    out.add(
-        Arguments.of(
-            "hostile identifiers",
-            ReductionFixtures.withIdentifiers(REPORT, ReductionFixtures.hostileIdentifiers())));
-    for (int i = 0; i < ReductionFixtures.SHAPE_NAMES.size(); i++) {
-      out.add(
-          Arguments.of(
-              ReductionFixtures.SHAPE_NAMES.get(i), ReductionFixtures.unusualShapes().get(i)));
-    }
-    return out.stream();
-  }
-
   @ParameterizedTest(name = "{0}")
-  @MethodSource("unusualReports")
+  @MethodSource("org.oedometry.fitting.reduction.ReductionFixtures#unusualReports")
   @DisplayName(
       "AGS4 file rules (from memory, as above) hold for hostile identifiers (quotes, commas,"
           + " backslash, non-ASCII, 20 000 characters, a 401-digit depth) and for unusual tests;"

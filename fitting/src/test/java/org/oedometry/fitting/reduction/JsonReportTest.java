@@ -2,15 +2,12 @@ package org.oedometry.fitting.reduction;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.oedometry.core.compressibility.Derived;
 import org.oedometry.core.compressibility.IncrementCompressibility;
@@ -56,22 +53,8 @@ class JsonReportTest {
     readsBack(REPORT);
   }
 
-  static Stream<Arguments> unusualReports() {
-    List<Arguments> out = new ArrayList<>();
-    out.add(
-        Arguments.of(
-            "hostile identifiers",
-            ReductionFixtures.withIdentifiers(REPORT, ReductionFixtures.hostileIdentifiers())));
-    for (int i = 0; i < ReductionFixtures.SHAPE_NAMES.size(); i++) {
-      out.add(
-          Arguments.of(
-              ReductionFixtures.SHAPE_NAMES.get(i), ReductionFixtures.unusualShapes().get(i)));
-    }
-    return out.stream();
-  }
-
   @ParameterizedTest(name = "{0}")
-  @MethodSource("unusualReports")
+  @MethodSource("org.oedometry.fitting.reduction.ReductionFixtures#unusualReports")
   @DisplayName(
       "Hostile identifiers (quotes, backslash, non-ASCII, joiners, 20 000 characters) and unusual"
           + " tests give valid JSON (RFC 8259, strict parser) that reads back to the report's"

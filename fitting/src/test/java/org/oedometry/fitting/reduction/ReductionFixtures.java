@@ -2,6 +2,8 @@ package org.oedometry.fitting.reduction;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.provider.Arguments;
 import org.oedometry.core.DrainagePathRule;
 import org.oedometry.core.LoadIncrement;
 import org.oedometry.core.OedometerTest;
@@ -119,6 +121,20 @@ final class ReductionFixtures {
    */
   static List<TestReport> unusualShapes() {
     return Shapes.REPORTS;
+  }
+
+  /**
+   * Arguments (name, report) for parameterised report tests: the mixed report with {@link
+   * #hostileIdentifiers()}, then each of {@link #unusualShapes()}.
+   */
+  static Stream<Arguments> unusualReports() {
+    List<Arguments> out = new ArrayList<>();
+    out.add(
+        Arguments.of("hostile identifiers", withIdentifiers(mixedReport(), hostileIdentifiers())));
+    for (int i = 0; i < SHAPE_NAMES.size(); i++) {
+      out.add(Arguments.of(SHAPE_NAMES.get(i), unusualShapes().get(i)));
+    }
+    return out.stream();
   }
 
   /** The names of {@link #unusualShapes()}, in the same order. */

@@ -3,14 +3,11 @@ package org.oedometry.fitting.reduction;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.oedometry.fitting.CvMethod;
 
@@ -90,22 +87,8 @@ class TextReportTest {
         .contains("reviewed by a qualified engineer");
   }
 
-  static Stream<Arguments> unusualReports() {
-    List<Arguments> out = new ArrayList<>();
-    out.add(
-        Arguments.of(
-            "hostile identifiers",
-            ReductionFixtures.withIdentifiers(REPORT, ReductionFixtures.hostileIdentifiers())));
-    for (int i = 0; i < ReductionFixtures.SHAPE_NAMES.size(); i++) {
-      out.add(
-          Arguments.of(
-              ReductionFixtures.SHAPE_NAMES.get(i), ReductionFixtures.unusualShapes().get(i)));
-    }
-    return out.stream();
-  }
-
   @ParameterizedTest(name = "{0}")
-  @MethodSource("unusualReports")
+  @MethodSource("org.oedometry.fitting.reduction.ReductionFixtures#unusualReports")
   @DisplayName(
       "Hostile identifiers and unusual tests: no control character but the documented '\\n' line"
           + " ends, the labels verbatim on the second line, one table row per increment, every"
