@@ -17,7 +17,24 @@ public record DataWarning(Kind kind, String message) {
      * The specific gravity of the solids is outside 2.0 to 3.2, the range of most mineral soils
      * (common practice); organic soils and peat lie below it, soils with heavy minerals above.
      */
-    UNUSUAL_SPECIFIC_GRAVITY
+    UNUSUAL_SPECIFIC_GRAVITY,
+    /**
+     * A degree of saturation S = w G<sub>s</sub> / e (initial, or final where both the dry mass and
+     * the final water content were given) is above {@link OedometerTest#SATURATION_WARNING_ABOVE}:
+     * the water content, specific gravity, height or dry mass is probably wrong.
+     */
+    SATURATION_ABOVE_ONE,
+    /**
+     * The final degree of saturation (dry mass and final water content both given) is below {@link
+     * OedometerTest#FINAL_SATURATION_WARNING_BELOW}: a specimen kept under water should end
+     * saturated.
+     */
+    FINAL_SATURATION_BELOW_ONE,
+    /**
+     * The initial void ratio from the heights and the one from the bulk density and initial water
+     * content differ by more than {@link OedometerTest#VOID_RATIO_AGREEMENT} of 1 + e<sub>0</sub>.
+     */
+    VOID_RATIO_DISAGREEMENT
   }
 
   /**

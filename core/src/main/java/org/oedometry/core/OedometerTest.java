@@ -35,6 +35,30 @@ public final class OedometerTest {
 
   private static final double STRESS_MATCH_TOLERANCE = 1e-9;
 
+  /**
+   * Degree of saturation above which {@link #warnings()} reports {@link
+   * DataWarning.Kind#SATURATION_ABOVE_ONE}: 1.05. Our choice, stated so that it can be reviewed: a
+   * computed S a few percent above 1 is common from the scatter of water content, specific gravity,
+   * height and dry mass (common practice), while 5 % above points at a wrong value.
+   */
+  public static final double SATURATION_WARNING_ABOVE = 1.05;
+
+  /**
+   * Final degree of saturation below which {@link #warnings()} reports {@link
+   * DataWarning.Kind#FINAL_SATURATION_BELOW_ONE}: 0.95 (our choice, the mirror of {@link
+   * #SATURATION_WARNING_ABOVE}). A specimen kept under water through the test should end saturated.
+   */
+  public static final double FINAL_SATURATION_WARNING_BELOW = 0.95;
+
+  /**
+   * Largest relative difference of 1 + e<sub>0</sub> between the initial void ratio from the
+   * heights and the one from bulk density before {@link #warnings()} reports {@link
+   * DataWarning.Kind#VOID_RATIO_DISAGREEMENT}: 0.02. 1 + e = G<sub>s</sub> &rho;<sub>w</sub> /
+   * &rho;<sub>d</sub>, so this is a 2 % difference between two dry densities of the same specimen
+   * (our choice, stated so that it can be reviewed).
+   */
+  public static final double VOID_RATIO_AGREEMENT = 0.02;
+
   private final Specimen specimen;
   private final Drainage drainage;
   private final DrainagePathRule drainagePathRule;
@@ -295,26 +319,150 @@ public final class OedometerTest {
   }
 
   /**
-   * Initial degree of saturation S<sub>0</sub> = w<sub>0</sub> G<sub>s</sub> / e<sub>0</sub>.
-   * Values a little above 1 are common from measurement error; much above 1 points at a wrong
-   * input.
+   * Initial degree of saturation S<sub>0</sub> = w<sub>0</sub> G<sub>s</sub> / e<sub>0</sub> (the
+   * phase relation S e = w G<sub>s</sub>). Values a little above 1 are common from measurement
+   * error; much above 1 points at a wrong input ({@link #warnings()}).
    *
-   * @return a ratio (1 for saturated), or empty when no initial water content was given
+   * @return a ratio (1 for saturated; finite, since w &le; 100, G<sub>s</sub> &le; 6 and e = H /
+   *     H<sub>s</sub> - 1 &ge; 2<sup>-52</sup>), or empty when no initial water content was given
    */
   public OptionalDouble initialDegreeOfSaturation() {
     OptionalDouble w0 = specimen.initialWaterContent();
     return w0.isPresent()
-        ? OptionalDouble.of(w0.getAsDouble() * specimen.specificGravity() / initialVoidRatio())
+        ? saturation(w0.getAsDouble(), initialVoidRatio())
         : OptionalDouble.empty();
   }
 
   /**
-   * Remarks on valid but unusual input (currently those of the specimen).
+   * Final degree of saturation S<sub>f</sub> = w<sub>f</sub> G<sub>s</sub> / e<sub>f</sub>, with
+   * e<sub>f</sub> the void ratio at the last reading of the last increment from the heights and the
+   * dry mass. Present only when the specimen has both a dry mass and a final water content: without
+   * a dry mass the final water content defines the solids by assuming S<sub>f</sub> = 1, so there
+   * is nothing to check. A specimen kept under water should end near 1 ({@link #warnings()}).
    *
-   * @return an unmodifiable list, empty when there is nothing to say
+   * @return a ratio (1 for saturated; finite, as for {@link #initialDegreeOfSaturation()}), or
+   *     empty (see above)
+   */
+  public OptionalDouble finalDegreeOfSaturation() {
+    OptionalDouble wf = specimen.finalWaterContent();
+    return wf.isPresent() && specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
+        ? saturation(wf.getAsDouble(), voidRatioAtEnd(increments.size() - 1))
+        : OptionalDouble.empty();
+  }
+
+  private OptionalDouble saturation(double waterContent, double voidRatio) {
+    return OptionalDouble.of(waterContent * specimen.specificGravity() / voidRatio);
+  }
+
+  /**
+   * Remarks on valid but unusual input: those of the specimen ({@link
+   * DataWarning.Kind#UNUSUAL_SPECIFIC_GRAVITY}), and the phase relations checked against each other
+   * where the inputs allow:
+   *
+   * <ul>
+   *   <li>{@link DataWarning.Kind#SATURATION_ABOVE_ONE}: S<sub>0</sub> or S<sub>f</sub> above
+   *       {@value #SATURATION_WARNING_ABOVE};
+   *   <li>{@link DataWarning.Kind#FINAL_SATURATION_BELOW_ONE}: S<sub>f</sub> below {@value
+   *       #FINAL_SATURATION_WARNING_BELOW};
+   *   <li>{@link DataWarning.Kind#VOID_RATIO_DISAGREEMENT}: 1 + e<sub>0</sub> from the heights and
+   *       from the bulk density ({@link Specimen#initialVoidRatioFromDensity()}) more than {@value
+   *       #VOID_RATIO_AGREEMENT} apart, relative.
+   * </ul>
+   *
+   * <p>A warning never stops the reduction; each message names the values compared so that the
+   * technician can find the wrong one.
+   *
+   * @return an unmodifiable list in the order above, empty when there is nothing to say
    */
   public List<DataWarning> warnings() {
-    return specimen.warnings();
+    List<DataWarning> out = new ArrayList<>(specimen.warnings());
+    OptionalDouble w0 = specimen.initialWaterContent();
+    if (w0.isPresent()) {
+      saturationAbove(out, "initial", "S0", "w0", w0.getAsDouble(), "e0", initialVoidRatio());
+    }
+    OptionalDouble wf = specimen.finalWaterContent();
+    if (wf.isPresent() && specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS) {
+      double ef = voidRatioAtEnd(increments.size() - 1);
+      saturationAbove(out, "final", "Sf", "wf", wf.getAsDouble(), "ef", ef);
+      double sf = wf.getAsDouble() * specimen.specificGravity() / ef;
+      if (sf < FINAL_SATURATION_WARNING_BELOW) {
+        out.add(
+            new DataWarning(
+                DataWarning.Kind.FINAL_SATURATION_BELOW_ONE,
+                Checks.format(
+                    "final degree of saturation Sf = wf Gs / ef = %s (wf %s, Gs %s, ef %s at the"
+                        + " last reading) is below %s: a specimen kept under water should end"
+                        + " saturated; check the final water content (water lost before"
+                        + " weighing?), the dry mass and the final height",
+                    Checks.brief(sf),
+                    Checks.brief(wf.getAsDouble()),
+                    Checks.brief(specimen.specificGravity()),
+                    Checks.brief(ef),
+                    Checks.brief(FINAL_SATURATION_WARNING_BELOW))));
+      }
+    }
+    OptionalDouble fromDensity = specimen.initialVoidRatioFromDensity();
+    if (fromDensity.isPresent()) {
+      double e0 = initialVoidRatio();
+      double other = fromDensity.getAsDouble();
+      // Both void ratios are finite and > 0, so neither the difference nor 1 + e0 overflows.
+      double difference = Math.abs(e0 - other) / (1 + e0);
+      if (!(difference <= VOID_RATIO_AGREEMENT)) {
+        out.add(
+            new DataWarning(
+                DataWarning.Kind.VOID_RATIO_DISAGREEMENT,
+                Checks.format(
+                    "initial void ratio from the heights (%s, %s) and from the bulk density (%s,"
+                        + " with w0 %s and Gs %s) differ by more than %s of 1 + e0: check the"
+                        + " bulk density, the initial water content, the specimen's size and %s",
+                    Checks.brief(e0),
+                    specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
+                        ? "with the dry mass"
+                        : "with the final water content",
+                    Checks.brief(other),
+                    Checks.brief(w0.getAsDouble()),
+                    Checks.brief(specimen.specificGravity()),
+                    Checks.brief(VOID_RATIO_AGREEMENT),
+                    specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
+                        ? "the dry mass"
+                        : "the final water content")));
+      }
+    }
+    return List.copyOf(out);
+  }
+
+  private void saturationAbove(
+      List<DataWarning> out,
+      String which,
+      String symbol,
+      String waterSymbol,
+      double waterContent,
+      String voidSymbol,
+      double voidRatio) {
+    double s = waterContent * specimen.specificGravity() / voidRatio;
+    if (s > SATURATION_WARNING_ABOVE) {
+      out.add(
+          new DataWarning(
+              DataWarning.Kind.SATURATION_ABOVE_ONE,
+              Checks.format(
+                  "%s degree of saturation %s = %s Gs / %s = %s (%s %s, Gs %s, %s %s) is above %s:"
+                      + " more water than the voids can hold; check the water content, the"
+                      + " specific gravity, the specimen's height and its %s",
+                  which,
+                  symbol,
+                  waterSymbol,
+                  voidSymbol,
+                  Checks.brief(s),
+                  waterSymbol,
+                  Checks.brief(waterContent),
+                  Checks.brief(specimen.specificGravity()),
+                  voidSymbol,
+                  Checks.brief(voidRatio),
+                  Checks.brief(SATURATION_WARNING_ABOVE),
+                  specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
+                      ? "dry mass"
+                      : "final water content")));
+    }
   }
 
   private int checkIndex(int index) {

@@ -20,6 +20,11 @@ import org.oedometry.core.internal.Checks;
  *       OedometerTest#heightOfSolidsMetres()}).
  * </ul>
  *
+ * <p>A lab usually measures both (the final water content from the final wet mass and the oven-dry
+ * mass). Both may be given: the dry mass is then the basis, and the final water content is kept as
+ * a check, the final degree of saturation S<sub>f</sub> = w<sub>f</sub> G<sub>s</sub> /
+ * e<sub>f</sub> ({@link OedometerTest#finalDegreeOfSaturation()}).
+ *
  * <p>Void ratio at any height H: e = H / H<sub>s</sub> - 1. Water density &rho;<sub>w</sub> =
  * {@value #WATER_DENSITY} kg/m<sup>3</sup> (common practice; pure water is 999.97 kg/m<sup>3</sup>
  * at 4 &deg;C and 998.2 at 20 &deg;C, a difference below 0.2 %).
@@ -60,7 +65,8 @@ public final class Specimen {
   private final OptionalDouble diameter;
   private final double specificGravity;
   private final SolidsBasis solidsBasis;
-  private final double solidsValue;
+  private final OptionalDouble dryMass;
+  private final OptionalDouble finalWaterContent;
   private final OptionalDouble initialWaterContent;
   private final OptionalDouble bulkDensity;
 
@@ -87,15 +93,19 @@ public final class Specimen {
       area = Checks.positive(b.area.getAsDouble(), "area", "m^2");
     }
     specificGravity = Checks.specificGravity(b.specificGravity);
-    if (b.dryMass.isPresent() == b.finalWaterContent.isPresent()) {
+    if (b.dryMass.isEmpty() && b.finalWaterContent.isEmpty()) {
       throw new IllegalArgumentException(
-          b.dryMass.isPresent()
-              ? "give either the dry mass or the final water content, not both"
-              : "the specimen needs its dry mass or its final water content");
+          "the specimen needs its dry mass or its final water content (or both)");
     }
+    finalWaterContent =
+        b.finalWaterContent.isPresent()
+            ? OptionalDouble.of(
+                waterContent(b.finalWaterContent.getAsDouble(), "final water content", false))
+            : OptionalDouble.empty();
     if (b.dryMass.isPresent()) {
       solidsBasis = SolidsBasis.DRY_MASS;
-      solidsValue = Checks.positive(b.dryMass.getAsDouble(), "dry mass", "kg");
+      double solidsValue = Checks.positive(b.dryMass.getAsDouble(), "dry mass", "kg");
+      dryMass = OptionalDouble.of(solidsValue);
       double hs = solidsValue / (specificGravity * WATER_DENSITY * area);
       if (hs == Double.POSITIVE_INFINITY) {
         throw new IllegalArgumentException(
@@ -120,7 +130,7 @@ public final class Specimen {
       }
     } else {
       solidsBasis = SolidsBasis.FINAL_WATER_CONTENT;
-      solidsValue = waterContent(b.finalWaterContent.getAsDouble(), "final water content", false);
+      dryMass = OptionalDouble.empty();
     }
     initialWaterContent =
         b.initialWaterContent.isPresent()
@@ -215,25 +225,22 @@ public final class Specimen {
   }
 
   /**
-   * Dry mass M<sub>s</sub>, when the solids were given by dry mass.
+   * Dry mass M<sub>s</sub>, when it was given (it is then the {@link SolidsBasis#DRY_MASS basis}).
    *
    * @return kg, or empty
    */
   public OptionalDouble dryMassKilograms() {
-    return solidsBasis == SolidsBasis.DRY_MASS
-        ? OptionalDouble.of(solidsValue)
-        : OptionalDouble.empty();
+    return dryMass;
   }
 
   /**
-   * Final water content w<sub>f</sub> (a ratio, 0.35 for 35 %), when the solids were given by it.
+   * Final water content w<sub>f</sub> (a ratio, 0.35 for 35 %), when it was given: the basis of the
+   * solids when no dry mass was given, otherwise a check on the final state.
    *
    * @return ratio, or empty
    */
   public OptionalDouble finalWaterContent() {
-    return solidsBasis == SolidsBasis.FINAL_WATER_CONTENT
-        ? OptionalDouble.of(solidsValue)
-        : OptionalDouble.empty();
+    return finalWaterContent;
   }
 
   /**
@@ -263,19 +270,20 @@ public final class Specimen {
    */
   public OptionalDouble heightOfSolidsFromDryMass() {
     return solidsBasis == SolidsBasis.DRY_MASS
-        ? OptionalDouble.of(solidsValue / (specificGravity * WATER_DENSITY * area))
+        ? OptionalDouble.of(dryMass.getAsDouble() / (specificGravity * WATER_DENSITY * area))
         : OptionalDouble.empty();
   }
 
   /**
    * Final void ratio of a specimen saturated at the end of the test, e<sub>f</sub> = w<sub>f</sub>
-   * G<sub>s</sub>.
+   * G<sub>s</sub>, when it is the basis of the solids (no dry mass given).
    *
-   * @return dimensionless, or empty for the dry-mass basis
+   * @return dimensionless, or empty for the dry-mass basis (the final void ratio then comes from
+   *     the heights, {@link OedometerTest#voidRatioAtEnd(int)}, and w<sub>f</sub> checks it)
    */
   public OptionalDouble finalVoidRatioFromWaterContent() {
     return solidsBasis == SolidsBasis.FINAL_WATER_CONTENT
-        ? OptionalDouble.of(solidsValue * specificGravity)
+        ? OptionalDouble.of(finalWaterContent.getAsDouble() * specificGravity)
         : OptionalDouble.empty();
   }
 
@@ -328,11 +336,8 @@ public final class Specimen {
     } else {
       b.area(area);
     }
-    if (solidsBasis == SolidsBasis.DRY_MASS) {
-      b.dryMass(solidsValue);
-    } else {
-      b.finalWaterContent(solidsValue);
-    }
+    b.dryMass = dryMass;
+    b.finalWaterContent = finalWaterContent;
     b.initialWaterContent = initialWaterContent;
     b.bulkDensity = bulkDensity;
     return b;
@@ -351,8 +356,8 @@ public final class Specimen {
         && Double.compare(area, s.area) == 0
         && diameter.equals(s.diameter)
         && Double.compare(specificGravity, s.specificGravity) == 0
-        && solidsBasis == s.solidsBasis
-        && Double.compare(solidsValue, s.solidsValue) == 0
+        && dryMass.equals(s.dryMass)
+        && finalWaterContent.equals(s.finalWaterContent)
         && initialWaterContent.equals(s.initialWaterContent)
         && bulkDensity.equals(s.bulkDensity);
   }
@@ -364,8 +369,8 @@ public final class Specimen {
         area,
         diameter,
         specificGravity,
-        solidsBasis,
-        solidsValue,
+        dryMass,
+        finalWaterContent,
         initialWaterContent,
         bulkDensity);
   }
@@ -385,9 +390,8 @@ public final class Specimen {
       text.append("A ").append(area).append(" m^2");
     }
     text.append(", Gs ").append(specificGravity);
-    text.append(solidsBasis == SolidsBasis.DRY_MASS ? ", dry mass " : ", final w ")
-        .append(solidsValue)
-        .append(solidsBasis == SolidsBasis.DRY_MASS ? " kg" : "");
+    dryMass.ifPresent(m -> text.append(", dry mass ").append(m).append(" kg"));
+    finalWaterContent.ifPresent(w -> text.append(", final w ").append(w));
     initialWaterContent.ifPresent(w -> text.append(", initial w ").append(w));
     bulkDensity.ifPresent(rho -> text.append(", bulk density ").append(rho).append(" kg/m^3"));
     return text.append(']').toString();
@@ -454,8 +458,8 @@ public final class Specimen {
     }
 
     /**
-     * Sets the dry mass of the specimen M<sub>s</sub> (give the dry mass or the final water
-     * content).
+     * Sets the oven-dry mass of the specimen M<sub>s</sub> (give the dry mass, the final water
+     * content or both; with both, the dry mass is the basis of the solids).
      *
      * @param kilograms kg; finite, &gt; 0 (checked by {@link #build()})
      * @return this builder
@@ -466,8 +470,10 @@ public final class Specimen {
     }
 
     /**
-     * Sets the final water content w<sub>f</sub> of the specimen, saturated at the end of the test
-     * (give the dry mass or the final water content).
+     * Sets the final water content w<sub>f</sub> of the specimen at the end of the test (give the
+     * dry mass, the final water content or both): without a dry mass the specimen is taken as
+     * saturated at the end (e<sub>f</sub> = w<sub>f</sub> G<sub>s</sub>); with one, w<sub>f</sub>
+     * checks the final degree of saturation.
      *
      * @param ratio a ratio, 0.35 for 35 %; &gt; 0 and &le; {@value #MAX_WATER_CONTENT} (checked by
      *     {@link #build()})
@@ -506,10 +512,11 @@ public final class Specimen {
      *
      * @return the specimen
      * @throws IllegalArgumentException if a value is missing, out of range or not finite, if both
-     *     or neither of diameter and area (or dry mass and final water content) are given, if the
-     *     dry mass gives a height of solids not less than the initial height (or so small that the
-     *     void ratio overflows), or if the bulk density and initial water content give a void ratio
-     *     that is not finite and &gt; 0; the message names the value
+     *     or neither of diameter and area are given, if neither the dry mass nor the final water
+     *     content is given, if the dry mass gives a height of solids not less than the initial
+     *     height (or so small that the void ratio overflows), or if the bulk density and initial
+     *     water content give a void ratio that is not finite and &gt; 0; the message names the
+     *     value
      */
     public Specimen build() {
       return new Specimen(this);

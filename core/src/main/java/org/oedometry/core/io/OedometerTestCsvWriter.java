@@ -84,7 +84,8 @@ public final class OedometerTestCsvWriter {
       p.printRecord("specific_gravity", number(s.specificGravity()));
       if (s.dryMassKilograms().isPresent()) {
         p.printRecord("dry_mass_kg", number(s.dryMassKilograms().getAsDouble()));
-      } else {
+      }
+      if (s.finalWaterContent().isPresent()) {
         p.printRecord("final_water_content_ratio", number(s.finalWaterContent().getAsDouble()));
       }
       if (s.initialWaterContent().isPresent()) {

@@ -31,13 +31,14 @@
  *
  * Required: {@code initial_height_<length>}, {@code diameter_<length>} or {@code area_<area>},
  * {@code specific_gravity} (no unit), and {@code dry_mass_<mass>} or {@code
- * final_water_content_<ratio|percent>}. Optional: {@code initial_water_content_<ratio|percent>},
- * {@code bulk_density_<density>}, {@code drainage} ({@code double} (default) or {@code single}),
- * {@code drainage_path_rule} ({@code start_height}, {@code height_at_half_consolidation} (default),
- * {@code mean_height}), the identifiers {@code project}, {@code borehole}, {@code sample}, {@code
- * depth}, and, with gauge readings only, {@code gauge_zero_<length>} and {@code gauge_direction}
- * ({@code increases_with_compression} or {@code decreases_with_compression}). Each property at most
- * once; unknown properties are errors.
+ * final_water_content_<ratio|percent>} or both (with both, the dry mass defines the solids and the
+ * final water content checks the final degree of saturation). Optional: {@code
+ * initial_water_content_<ratio|percent>}, {@code bulk_density_<density>}, {@code drainage} ({@code
+ * double} (default) or {@code single}), {@code drainage_path_rule} ({@code start_height}, {@code
+ * height_at_half_consolidation} (default), {@code mean_height}), the identifiers {@code project},
+ * {@code borehole}, {@code sample}, {@code depth}, and, with gauge readings only, {@code
+ * gauge_zero_<length>} and {@code gauge_direction} ({@code increases_with_compression} or {@code
+ * decreases_with_compression}). Each property at most once; unknown properties are errors.
  *
  * <h2>{@code increments.csv}: one row per increment</h2>
  *

@@ -197,9 +197,14 @@ class OedometerTestCsvReaderTest {
             PROPERTIES.replace("specific_gravity,2.70", "specific_gravity,1.8"),
             INCREMENTS,
             READINGS);
+    // With G_s 1.8 the 120 g of solids fill H_s = 0.120 / (1.8 x 1000 x 4.4179e-3 m^2) = 15.09 mm
+    // of the 20 mm, so e0 = 0.325 and S0 = 0.36 x 1.8 / 0.325 = 1.99 (by hand): the phase check
+    // notices the inconsistency too.
     assertThat(t.warnings())
         .extracting(DataWarning::kind)
-        .containsExactly(DataWarning.Kind.UNUSUAL_SPECIFIC_GRAVITY);
+        .containsExactly(
+            DataWarning.Kind.UNUSUAL_SPECIFIC_GRAVITY, DataWarning.Kind.SATURATION_ABOVE_ONE);
+    assertThat(t.warnings().get(1).message()).contains("= 1.99");
   }
 
   @Test

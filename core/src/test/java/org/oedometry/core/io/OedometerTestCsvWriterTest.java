@@ -49,4 +49,22 @@ class OedometerTestCsvWriterTest {
     OedometerTestCsvWriter.write(t, dir);
     assertThat(OedometerTestCsvReader.read(dir)).isEqualTo(t);
   }
+
+  @Test
+  @DisplayName("dry mass and final water content together are written and read back")
+  void bothSolidsInputsRoundTrip() {
+    OedometerTest t =
+        OedometerTest.builder(example().specimen().toBuilder().finalWaterContent(0.405).build())
+            .increments(example().increments())
+            .drainagePathRule(example().drainagePathRule())
+            .identifiers(example().identifiers())
+            .build();
+    CsvTables written = OedometerTestCsvWriter.format(t);
+    assertThat(written.properties())
+        .contains("dry_mass_kg,0.12\n")
+        .contains("final_water_content_ratio,0.405\n");
+    OedometerTest back = OedometerTestCsvReader.parse(written);
+    assertThat(back).isEqualTo(t);
+    assertThat(back.finalDegreeOfSaturation()).isEqualTo(t.finalDegreeOfSaturation()).isPresent();
+  }
 }

@@ -1,6 +1,7 @@
 package org.oedometry.fitting.reduction;
 
 import java.util.Optional;
+import org.oedometry.core.DataWarning;
 import org.oedometry.core.compressibility.Derived;
 import org.oedometry.core.compressibility.IncrementCompressibility;
 import org.oedometry.core.compressibility.IndexBranch;
@@ -15,7 +16,8 @@ import org.oedometry.fitting.FitWarning;
 /**
  * The JSON rendering of a {@link TestReport}: SI values, each key naming its unit, absent values as
  * null with a "..._reason" key beside them (null when the value is present), increments numbered
- * from 1 as in the other renderings.
+ * from 1 as in the other renderings. Ratios (water content, degree of saturation) as ratios, 0.35
+ * for 35 %.
  */
 final class JsonReport {
 
@@ -42,7 +44,22 @@ final class JsonReport {
     w.name("height_of_solids_m").value(r.heightOfSolidsMetres());
     w.name("initial_void_ratio").value(r.initialVoidRatio());
     w.name("seating_stress_pa").value(r.seatingStressPascals());
+    w.name("dry_mass_kg").value(r.specimen().dryMassKilograms());
+    w.name("initial_water_content").value(r.specimen().initialWaterContent());
+    w.name("final_water_content").value(r.specimen().finalWaterContent());
+    w.name("bulk_density_kg_per_m3").value(r.specimen().bulkDensityKilogramsPerCubicMetre());
+    w.name("initial_void_ratio_from_density").value(r.specimen().initialVoidRatioFromDensity());
+    w.name("initial_degree_of_saturation").value(r.initialDegreeOfSaturation());
+    w.name("final_degree_of_saturation").value(r.finalDegreeOfSaturation());
     w.endObject();
+    w.name("data_warnings").beginArray();
+    for (DataWarning dw : r.dataWarnings()) {
+      w.beginObject();
+      w.name("kind").value(dw.kind().name());
+      w.name("message").value(dw.message());
+      w.endObject();
+    }
+    w.endArray();
     w.name("drainage").value(r.drainage().name());
     w.name("drainage_path_rule").value(r.drainagePathRule().name());
     w.name("options").beginObject();

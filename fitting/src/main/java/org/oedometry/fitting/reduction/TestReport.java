@@ -5,7 +5,9 @@ import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.oedometry.core.DataWarning;
 import org.oedometry.core.DrainagePathRule;
+import org.oedometry.core.OedometerTest;
 import org.oedometry.core.Specimen;
 import org.oedometry.core.TestIdentifiers;
 import org.oedometry.core.compressibility.CompressionCurve;
@@ -40,6 +42,13 @@ import org.oedometry.theory.Drainage;
  * @param heightOfSolidsMetres H<sub>s</sub>, m
  * @param initialVoidRatio e<sub>0</sub>, dimensionless
  * @param seatingStressPascals stress before the first increment, Pa
+ * @param initialDegreeOfSaturation S<sub>0</sub> = w<sub>0</sub> G<sub>s</sub> / e<sub>0</sub>, or
+ *     empty without an initial water content ({@link OedometerTest#initialDegreeOfSaturation()})
+ * @param finalDegreeOfSaturation S<sub>f</sub> = w<sub>f</sub> G<sub>s</sub> / e<sub>f</sub>, or
+ *     empty unless both the dry mass and the final water content were given ({@link
+ *     OedometerTest#finalDegreeOfSaturation()})
+ * @param dataWarnings the test's remarks on its input data ({@link OedometerTest#warnings()}:
+ *     unusual specific gravity, phase relations that disagree), empty when there is nothing to say
  * @param increments one row per increment, in the order applied
  * @param compressionCurve the e &ndash; log &sigma;' points the derivation used, or why none
  * @param preconsolidation &sigma;'<sub>p</sub> by each construction of {@link
@@ -62,6 +71,9 @@ public record TestReport(
     double heightOfSolidsMetres,
     double initialVoidRatio,
     double seatingStressPascals,
+    OptionalDouble initialDegreeOfSaturation,
+    OptionalDouble finalDegreeOfSaturation,
+    List<DataWarning> dataWarnings,
     List<IncrementReport> increments,
     Derived<CompressionCurve> compressionCurve,
     List<PreconsolidationEstimate> preconsolidation,
@@ -81,6 +93,9 @@ public record TestReport(
    * @param heightOfSolidsMetres m; finite, &gt; 0
    * @param initialVoidRatio finite, &gt; 0
    * @param seatingStressPascals Pa; finite, &ge; 0
+   * @param initialDegreeOfSaturation not null; finite and &ge; 0 when present
+   * @param finalDegreeOfSaturation not null; finite and &ge; 0 when present
+   * @param dataWarnings no null element; copied
    * @param increments at least one, no null element; copied
    * @param compressionCurve not null
    * @param preconsolidation no null element; copied
@@ -112,6 +127,9 @@ public record TestReport(
           String.format(
               Locale.ROOT, "seating stress (%s Pa) must be finite and >= 0", seatingStressPascals));
     }
+    saturation(initialDegreeOfSaturation, "initial degree of saturation");
+    saturation(finalDegreeOfSaturation, "final degree of saturation");
+    dataWarnings = List.copyOf(dataWarnings);
     increments = List.copyOf(increments);
     if (increments.isEmpty()) {
       throw new IllegalArgumentException("a test report needs at least one increment");
@@ -122,6 +140,15 @@ public record TestReport(
     Objects.requireNonNull(compressionIndex, "compression index");
     recompressionBranches = List.copyOf(recompressionBranches);
     Objects.requireNonNull(permeabilityChange, "permeability change");
+  }
+
+  private static void saturation(OptionalDouble value, String name) {
+    Objects.requireNonNull(value, name);
+    if (value.isPresent()
+        && (!(value.getAsDouble() >= 0) || Double.isInfinite(value.getAsDouble()))) {
+      throw new IllegalArgumentException(
+          String.format(Locale.ROOT, "%s (%s) must be finite and >= 0", name, value.getAsDouble()));
+    }
   }
 
   /**

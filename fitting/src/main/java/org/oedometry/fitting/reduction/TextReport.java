@@ -3,9 +3,12 @@ package org.oedometry.fitting.reduction;
 import static org.oedometry.fitting.reduction.ReportUnits.format;
 import static org.oedometry.fitting.reduction.ReportUnits.map;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
+import org.oedometry.core.DataWarning;
+import org.oedometry.core.Specimen;
 import org.oedometry.core.compressibility.IndexBranch;
 import org.oedometry.core.compressibility.IndexFit;
 import org.oedometry.core.compressibility.PermeabilityChangeFit;
@@ -19,6 +22,44 @@ final class TextReport {
   private static final String ABSENT = "-";
 
   private TextReport() {}
+
+  /**
+   * The specimen's water contents, degrees of saturation and the initial void ratio from bulk
+   * density, those that were given or follow from what was given; percentages for water content and
+   * saturation.
+   */
+  private static String phases(TestReport r) {
+    List<String> parts = new ArrayList<>();
+    r.specimen()
+        .dryMassKilograms()
+        .ifPresent(m -> parts.add(String.format(Locale.ROOT, "dry mass %.4g g", m * 1000)));
+    r.specimen()
+        .initialWaterContent()
+        .ifPresent(w -> parts.add(String.format(Locale.ROOT, "w0 %.1f %%", w * 100)));
+    r.initialDegreeOfSaturation()
+        .ifPresent(x -> parts.add(String.format(Locale.ROOT, "S0 %.4g %%", x * 100)));
+    r.specimen()
+        .finalWaterContent()
+        .ifPresent(
+            w ->
+                parts.add(
+                    String.format(
+                        Locale.ROOT,
+                        r.specimen().solidsBasis() == Specimen.SolidsBasis.FINAL_WATER_CONTENT
+                            ? "wf %.1f %% (saturated at the end, assumed)"
+                            : "wf %.1f %%",
+                        w * 100)));
+    r.finalDegreeOfSaturation()
+        .ifPresent(x -> parts.add(String.format(Locale.ROOT, "Sf %.4g %%", x * 100)));
+    r.specimen()
+        .bulkDensityKilogramsPerCubicMetre()
+        .ifPresent(
+            rho -> parts.add(String.format(Locale.ROOT, "bulk density %.4g Mg/m3", rho / 1000)));
+    r.specimen()
+        .initialVoidRatioFromDensity()
+        .ifPresent(e -> parts.add(String.format(Locale.ROOT, "e0 from bulk density %.4f", e)));
+    return String.join(", ", parts);
+  }
 
   static String render(TestReport r) {
     StringBuilder s = new StringBuilder();
@@ -39,6 +80,7 @@ final class TextReport {
         r.initialVoidRatio(),
         r.drainage().name().toLowerCase(Locale.ROOT),
         r.drainagePathRule());
+    line(s, "Phases: %s", phases(r));
     line(s, "Results must be reviewed by a qualified engineer; local codes and standards govern.");
     line(s, "");
 
@@ -156,6 +198,10 @@ final class TextReport {
 
     line(s, "Warnings and missing values");
     boolean any = false;
+    for (DataWarning w : r.dataWarnings()) {
+      line(s, "  test: [%s] %s", w.kind(), w.message());
+      any = true;
+    }
     for (IncrementReport inc : r.increments()) {
       for (ReductionWarning w : inc.warnings()) {
         line(s, "  %d: [%s] %s", inc.index() + 1, w.kind(), w.message());

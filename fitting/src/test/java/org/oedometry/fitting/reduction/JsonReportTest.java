@@ -77,6 +77,7 @@ class JsonReportTest {
             "review_note",
             "identifiers",
             "specimen",
+            "data_warnings",
             "drainage",
             "drainage_path_rule",
             "options",
@@ -89,6 +90,24 @@ class JsonReportTest {
     same(specimen.get("diameter_m"), report.specimen().diameterMetres());
     same(specimen.get("height_of_solids_m"), report.heightOfSolidsMetres());
     same(specimen.get("initial_void_ratio"), report.initialVoidRatio());
+    same(specimen.get("dry_mass_kg"), report.specimen().dryMassKilograms());
+    same(specimen.get("initial_water_content"), report.specimen().initialWaterContent());
+    same(specimen.get("final_water_content"), report.specimen().finalWaterContent());
+    same(
+        specimen.get("bulk_density_kg_per_m3"),
+        report.specimen().bulkDensityKilogramsPerCubicMetre());
+    same(
+        specimen.get("initial_void_ratio_from_density"),
+        report.specimen().initialVoidRatioFromDensity());
+    same(specimen.get("initial_degree_of_saturation"), report.initialDegreeOfSaturation());
+    same(specimen.get("final_degree_of_saturation"), report.finalDegreeOfSaturation());
+    List<Object> dataWarnings = list(root.get("data_warnings"));
+    assertThat(dataWarnings).hasSize(report.dataWarnings().size());
+    for (int i = 0; i < dataWarnings.size(); i++) {
+      Map<String, Object> o = map(dataWarnings.get(i));
+      assertThat(o.get("kind")).isEqualTo(report.dataWarnings().get(i).kind().name());
+      assertThat(o.get("message")).isEqualTo(report.dataWarnings().get(i).message());
+    }
     assertThat(root.get("drainage_path_rule")).isEqualTo(report.drainagePathRule().name());
 
     List<Object> increments = list(root.get("increments"));

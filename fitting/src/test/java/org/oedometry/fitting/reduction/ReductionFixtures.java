@@ -105,6 +105,9 @@ final class ReductionFixtures {
         r.heightOfSolidsMetres(),
         r.initialVoidRatio(),
         r.seatingStressPascals(),
+        r.initialDegreeOfSaturation(),
+        r.finalDegreeOfSaturation(),
+        r.dataWarnings(),
         r.increments(),
         r.compressionCurve(),
         r.preconsolidation(),
@@ -125,12 +128,14 @@ final class ReductionFixtures {
 
   /**
    * Arguments (name, report) for parameterised report tests: the mixed report with {@link
-   * #hostileIdentifiers()}, then each of {@link #unusualShapes()}.
+   * #hostileIdentifiers()}, the report of {@link #phasesDisagree()}, then each of {@link
+   * #unusualShapes()}.
    */
   static Stream<Arguments> unusualReports() {
     List<Arguments> out = new ArrayList<>();
     out.add(
         Arguments.of("hostile identifiers", withIdentifiers(mixedReport(), hostileIdentifiers())));
+    out.add(Arguments.of("phases disagree", Phases.REPORT));
     for (int i = 0; i < SHAPE_NAMES.size(); i++) {
       out.add(Arguments.of(SHAPE_NAMES.get(i), unusualShapes().get(i)));
     }
@@ -140,6 +145,36 @@ final class ReductionFixtures {
   /** The names of {@link #unusualShapes()}, in the same order. */
   static final List<String> SHAPE_NAMES =
       List.of("one increment", "load, unload, reload", "one swelling increment", "readings flat");
+
+  /**
+   * The fixture test with a specimen whose phase relations disagree (invented): 120 g of solids
+   * with G<sub>s</sub> 2.70 in a 20 x 75 mm ring (e0 = 0.988 from the heights), w0 0.60 (S0 = 0.60
+   * x 2.70 / 0.988 = 1.64, by hand), wf 0.25 (Sf = 0.25 x 2.70 / e<sub>f</sub>, about 0.9 after
+   * some 2.4 mm of settlement) and a bulk density of 2.10 Mg/m<sup>3</sup> (e0 from density 2.70 x
+   * 1.60 / 2.10 - 1 = 1.057, 3.5 % of 1 + e0 away). It carries every phase warning of {@link
+   * OedometerTest#warnings()}.
+   */
+  static OedometerTest phasesDisagree() {
+    OedometerTest base = test(Drainage.DOUBLE, DrainagePathRule.HEIGHT_AT_HALF_CONSOLIDATION);
+    Specimen specimen =
+        Specimen.builder()
+            .initialHeight(0.020)
+            .diameter(0.075)
+            .specificGravity(2.70)
+            .dryMass(0.120)
+            .initialWaterContent(0.60)
+            .finalWaterContent(0.25)
+            .bulkDensity(2100)
+            .build();
+    return OedometerTest.builder(specimen)
+        .identifiers(base.identifiers())
+        .increments(base.increments())
+        .build();
+  }
+
+  private static final class Phases {
+    static final TestReport REPORT = TestReduction.reduce(phasesDisagree());
+  }
 
   private static final class Shapes {
     static final List<TestReport> REPORTS =

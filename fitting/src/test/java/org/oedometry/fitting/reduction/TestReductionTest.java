@@ -306,4 +306,18 @@ class TestReductionTest {
       assertThat(inc.methods()).allSatisfy(m -> assertThat(m.estimate()).isEmpty());
     }
   }
+
+  @Test
+  @DisplayName(
+      "The report carries the test's data warnings and degrees of saturation unchanged; a test"
+          + " with consistent phases has none")
+  void dataWarningsAndSaturation() {
+    OedometerTest t = ReductionFixtures.phasesDisagree();
+    TestReport r = TestReduction.reduce(t, FAST);
+    assertThat(r.dataWarnings()).isEqualTo(t.warnings()).isNotEmpty();
+    assertThat(r.initialDegreeOfSaturation()).isEqualTo(t.initialDegreeOfSaturation()).isPresent();
+    assertThat(r.finalDegreeOfSaturation()).isEqualTo(t.finalDegreeOfSaturation()).isPresent();
+    assertThat(REPORT.dataWarnings()).isEmpty();
+    assertThat(REPORT.finalDegreeOfSaturation()).isEmpty();
+  }
 }

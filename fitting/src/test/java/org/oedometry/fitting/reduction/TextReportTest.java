@@ -124,4 +124,32 @@ class TextReportTest {
       }
     }
   }
+
+  @Test
+  @DisplayName(
+      "Phases line: S0 in % equals V_w / V_v from the volumes; each data warning is listed under"
+          + " 'test'")
+  void phasesAndDataWarnings() {
+    TestReport r =
+        ReductionFixtures.unusualReports()
+            .filter(a -> a.get()[0].equals("phases disagree"))
+            .map(a -> (TestReport) a.get()[1])
+            .findFirst()
+            .orElseThrow();
+    List<String> lines = r.toText().lines().toList();
+    String phases = lines.stream().filter(l -> l.startsWith("Phases: ")).findFirst().orElseThrow();
+    // Definitions S = V_w / V_v, w = M_w / M_s (any soil mechanics text, from memory), with the
+    // fixture's invented inputs: 120 g of solids, G_s 2.70, 20 x 75 mm ring, w0 0.60.
+    double volume = Math.PI * 0.075 * 0.075 / 4 * 0.020;
+    double voids = volume - 0.120 / 2700;
+    double s0 = 0.60 * 0.120 / 1000 / voids;
+    String cell = phases.replaceAll(".*S0 ([0-9.]+) %.*", "$1");
+    // Printed to 4 significant figures (164.0 %), so within half a unit of the last one.
+    assertThat(Double.parseDouble(cell)).isCloseTo(100 * s0, within(0.05));
+    assertThat(phases).contains("dry mass 120.0 g", "w0 60.0 %", "wf 25.0 %", "Sf ");
+    assertThat(r.dataWarnings()).hasSize(3);
+    for (org.oedometry.core.DataWarning w : r.dataWarnings()) {
+      assertThat(lines).contains("  test: [" + w.kind() + "] " + w.message());
+    }
+  }
 }
