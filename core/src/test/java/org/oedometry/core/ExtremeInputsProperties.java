@@ -252,10 +252,21 @@ class ExtremeInputsProperties {
       double area = solids > 1 ? 1e-6 : 1.0;
       Specimen.Builder specimen = Specimen.builder().initialHeight(height).specificGravity(2.5);
       specimen.area(area);
-      if (random.nextBoolean()) {
+      int solidsInput = random.nextInt(3);
+      if (solidsInput != 1) {
         specimen.dryMass(solids * area * 2.5 * Specimen.WATER_DENSITY);
-      } else {
-        specimen.finalWaterContent(0.4); // e_f = 1: H_s is half the final height
+      }
+      if (solidsInput != 0) {
+        // Alone: e_f = 1, H_s is half the final height; with the dry mass: a check of S_f.
+        specimen.finalWaterContent(0.4);
+      }
+      // Phase inputs from their whole accepted range, so that the phase checks see extremes too.
+      if (random.nextBoolean()) {
+        specimen.initialWaterContent(
+            random.nextBoolean() ? 0 : Math.pow(10, -300 + 302 * random.nextDouble()));
+      }
+      if (random.nextBoolean()) {
+        specimen.bulkDensity(Math.pow(10, -300 + 608 * random.nextDouble()));
       }
       List<LoadIncrement> increments = new ArrayList<>();
       double stress = 0;
@@ -313,6 +324,14 @@ class ExtremeInputsProperties {
                 return;
               }
               assertThat(notFinite(test)).as("%s", w).isEmpty();
+              assertThat(test.initialDegreeOfSaturation().orElse(0)).as("%s", w).isFinite();
+              assertThat(test.finalDegreeOfSaturation().orElse(0)).as("%s", w).isFinite();
+              for (DataWarning warning : test.warnings()) {
+                assertThat(warning.message())
+                    .as("%s", w)
+                    .doesNotContain("NaN")
+                    .doesNotContain("Infinity");
+              }
               for (int i = 0; i < test.increments().size(); i++) {
                 double start = test.heightAtStartMetres(i);
                 double end = test.heightAtEndMetres(i);
