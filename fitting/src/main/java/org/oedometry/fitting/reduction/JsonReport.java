@@ -44,6 +44,7 @@ final class JsonReport {
     w.name("height_of_solids_m").value(r.heightOfSolidsMetres());
     w.name("initial_void_ratio").value(r.initialVoidRatio());
     w.name("seating_stress_pa").value(r.seatingStressPascals());
+    w.name("initial_dry_density_kg_per_m3").value(r.initialDryDensityKilogramsPerCubicMetre());
     w.name("dry_mass_kg").value(r.specimen().dryMassKilograms());
     w.name("initial_water_content").value(r.specimen().initialWaterContent());
     w.name("final_water_content").value(r.specimen().finalWaterContent());

@@ -152,6 +152,18 @@ public record TestReport(
   }
 
   /**
+   * Initial dry density &rho;<sub>d0</sub> = G<sub>s</sub> &rho;<sub>w</sub> / (1 + e<sub>0</sub>)
+   * (= M<sub>s</sub> / (A H<sub>0</sub>) when the dry mass defines the solids), with
+   * &rho;<sub>w</sub> = {@value Specimen#WATER_DENSITY} kg/m<sup>3</sup>.
+   *
+   * @return kg/m<sup>3</sup>, finite and &gt; 0 (1 + e<sub>0</sub> is finite since e<sub>0</sub>
+   *     is)
+   */
+  public double initialDryDensityKilogramsPerCubicMetre() {
+    return specimen.specificGravity() * Specimen.WATER_DENSITY / (1 + initialVoidRatio);
+  }
+
+  /**
    * &sigma;'<sub>p</sub> by one construction.
    *
    * @param method the construction

@@ -24,12 +24,17 @@ final class TextReport {
   private TextReport() {}
 
   /**
-   * The specimen's water contents, degrees of saturation and the initial void ratio from bulk
-   * density, those that were given or follow from what was given; percentages for water content and
-   * saturation.
+   * The specimen's initial dry density, water contents, degrees of saturation and the initial void
+   * ratio from bulk density, those that were given or follow from what was given; percentages for
+   * water content and saturation.
    */
   private static String phases(TestReport r) {
     List<String> parts = new ArrayList<>();
+    parts.add(
+        String.format(
+            Locale.ROOT,
+            "dry density %.4g Mg/m3",
+            r.initialDryDensityKilogramsPerCubicMetre() / 1000));
     r.specimen()
         .dryMassKilograms()
         .ifPresent(m -> parts.add(String.format(Locale.ROOT, "dry mass %.4g g", m * 1000)));

@@ -91,6 +91,9 @@ class JsonReportTest {
     same(specimen.get("height_of_solids_m"), report.heightOfSolidsMetres());
     same(specimen.get("initial_void_ratio"), report.initialVoidRatio());
     same(specimen.get("dry_mass_kg"), report.specimen().dryMassKilograms());
+    same(
+        specimen.get("initial_dry_density_kg_per_m3"),
+        report.initialDryDensityKilogramsPerCubicMetre());
     same(specimen.get("initial_water_content"), report.specimen().initialWaterContent());
     same(specimen.get("final_water_content"), report.specimen().finalWaterContent());
     same(

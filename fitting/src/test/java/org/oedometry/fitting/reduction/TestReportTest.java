@@ -2,6 +2,7 @@ package org.oedometry.fitting.reduction;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
 
 import java.util.List;
 import org.junit.jupiter.api.DisplayName;
@@ -88,5 +89,15 @@ class TestReportTest {
                     R.recompressionBranches(),
                     R.permeabilityChange()))
         .hasMessageContaining("initial void ratio (NaN)");
+  }
+
+  @Test
+  @DisplayName("Initial dry density G_s rho_w / (1 + e0) equals M_s / (A H0), the definition")
+  void initialDryDensity() {
+    double massOverVolume =
+        R.specimen().dryMassKilograms().getAsDouble()
+            / (R.specimen().areaSquareMetres() * R.specimen().initialHeightMetres());
+    assertThat(R.initialDryDensityKilogramsPerCubicMetre())
+        .isCloseTo(massOverVolume, within(1e-12 * massOverVolume));
   }
 }

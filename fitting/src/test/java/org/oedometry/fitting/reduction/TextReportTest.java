@@ -147,6 +147,9 @@ class TextReportTest {
     // Printed to 4 significant figures (164.0 %), so within half a unit of the last one.
     assertThat(Double.parseDouble(cell)).isCloseTo(100 * s0, within(0.05));
     assertThat(phases).contains("dry mass 120.0 g", "w0 60.0 %", "wf 25.0 %", "Sf ");
+    // Dry density M_s / V (definition): 120 g in 88.36 cm3 = 1.358 Mg/m3.
+    String dryDensity = phases.replaceAll(".*dry density ([0-9.]+) Mg/m3.*", "$1");
+    assertThat(Double.parseDouble(dryDensity)).isCloseTo(0.120 / volume / 1000, within(5e-4));
     assertThat(r.dataWarnings()).hasSize(3);
     for (org.oedometry.core.DataWarning w : r.dataWarnings()) {
       assertThat(lines).contains("  test: [" + w.kind() + "] " + w.message());
