@@ -158,8 +158,9 @@ public record GaugeConversion(LabUnit unit, GaugeDirection direction) {
    * @param apparatusDeflectionMetres for each increment, the calibrated deflection of the apparatus
    *     under the increment's stress after, relative to its state at the gauge zero, m; finite
    * @return one curve per increment, in order
-   * @throws IllegalArgumentException if the lists and array differ in size or are empty, or as
-   *     {@link #curve}, with the increment's index in the message
+   * @throws IllegalArgumentException if the lists and array differ in size or are empty, if a
+   *     deflection is not finite or differs from the one before by more than the range of a double
+   *     (the message names both), or as {@link #curve}, with the increment's index in the message
    * @throws NullPointerException if an argument is null
    */
   public List<SettlementCurve> curves(
@@ -183,12 +184,17 @@ public record GaugeConversion(LabUnit unit, GaugeDirection direction) {
       double[] r = readings.get(i);
       try {
         Checks.finite(apparatusDeflectionMetres[i], "apparatus deflection", "m");
-        curves.add(
-            curve(
-                elapsedSeconds.get(i),
-                r,
-                start,
-                apparatusDeflectionMetres[i] - previousDeflection));
+        double change = apparatusDeflectionMetres[i] - previousDeflection;
+        if (!Double.isFinite(change)) {
+          throw new IllegalArgumentException(
+              Checks.format(
+                  "the change of the apparatus deflection from %s m (increment at index %d) to %s m"
+                      + " is beyond the range of a double",
+                  Checks.number(previousDeflection),
+                  i - 1,
+                  Checks.number(apparatusDeflectionMetres[i])));
+        }
+        curves.add(curve(elapsedSeconds.get(i), r, start, change));
       } catch (IllegalArgumentException e) {
         throw new IllegalArgumentException("increment at index " + i + ": " + e.getMessage(), e);
       }

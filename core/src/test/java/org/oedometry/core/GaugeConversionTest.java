@@ -96,4 +96,23 @@ class GaugeConversionTest {
             "gauge reading at index 1 (1.0E308 m) less the apparatus deflection (-1.0E308 m) is"
                 + " beyond the range of a double");
   }
+
+  @Test
+  @DisplayName(
+      "apparatus deflections of 1e308 m and -1e308 m, each finite, whose change (-2e308 m) is beyond"
+          + " the largest double (about 1.8e308, IEEE 754): refused naming both deflections and the"
+          + " increment, never quoting an infinite value (project rule: no infinity leaves the"
+          + " library)")
+  void deflectionChangeBeyondTheDoubleRange() {
+    GaugeConversion g =
+        GaugeConversion.of(LabUnit.METRE, GaugeDirection.INCREASES_WITH_COMPRESSION);
+    List<double[]> times = List.of(new double[] {0, 60}, new double[] {0, 60});
+    List<double[]> readings = List.of(new double[] {0, 1e-3}, new double[] {1e-3, 2e-3});
+    assertThatThrownBy(() -> g.curves(0, times, readings, new double[] {1e308, -1e308}))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "increment at index 1: the change of the apparatus deflection from 1.0E308 m"
+                + " (increment at index 0) to -1.0E308 m is beyond the range of a double")
+        .hasMessageNotContaining("Infinity");
+  }
 }

@@ -72,25 +72,27 @@ import org.oedometry.theory.CurveParameters;
  *
  * <h2>Warnings and errors</h2>
  *
- * Warnings: swelling increment, parameter at a bound, interval wider than a factor of 2, residuals
- * with structure (a runs test on their signs, z &lt; -2.58), primary consolidation incomplete (T at
- * the last reading below 1 for the lower end of the c<sub>v</sub> interval: c<sub>v</sub> then
- * rests on an unfinished curve and must not be used without review), fewer than half the starts at
- * the best fit, outlying readings (an externally studentized residual beyond the 1 % Bonferroni
- * bound, with the leverage of each reading taken into account; the warning names the readings).
- * Measured on the invented study curves: a reading 10 noise deviations off in the middle of the
- * increment is flagged in 95 % of curves, on clean curves the warning appears in 2 to 4 %; the last
- * reading of a lab schedule, on which the secondary slope rests almost alone, is flagged only when
- * far off. {@link FitException}: the readings do not move, primary consolidation was over before
- * the first reading or is not seen at all (c<sub>v</sub> at the edge of the search), the c<sub>v
- * </sub> searched (T at the last reading 10<sup>-4</sup> to 10<sup>7</sup>) is not a finite
- * positive double for this drainage path and these times (H<sub>dr</sub><sup>2</sup> beyond the
- * range of doubles), the optimiser failed from every start (the message adds that primary
- * consolidation seems far from complete where the best start puts T at the last reading below 0.2:
- * such readings follow U = 2 &radic;(T/&pi;) and fix only d<sub>p</sub> &radic;c<sub>v</sub>), or
- * c<sub>v</sub> is not determined: its interval covers every c<sub>v</sub> searched, or an end of
- * it lies outside the normal double range (below 2.2 x 10<sup>-308</sup> m<sup>2</sup>/s, or above
- * the largest value that is finite in m<sup>2</sup>/yr).
+ * Warnings: swelling increment, parameter at a bound, interval wider than a factor of 2 (an
+ * interval that is not refused, see below, misses one end of the c<sub>v</sub> searched and so
+ * spans less than the square of its range, 10<sup>22</sup>), residuals with structure (a runs test
+ * on their signs, z &lt; -2.58), primary consolidation incomplete (T at the last reading below 1
+ * for the lower end of the c<sub>v</sub> interval: c<sub>v</sub> then rests on an unfinished curve
+ * and must not be used without review), fewer than half the starts at the best fit, outlying
+ * readings (an externally studentized residual beyond the 1 % Bonferroni bound, with the leverage
+ * of each reading taken into account; the warning names the readings). Measured on the invented
+ * study curves: a reading 10 noise deviations off in the middle of the increment is flagged in 95 %
+ * of curves, on clean curves the warning appears in 2 to 4 %; the last reading of a lab schedule,
+ * on which the secondary slope rests almost alone, is flagged only when far off. {@link
+ * FitException}: the readings do not move, primary consolidation was over before the first reading
+ * or is not seen at all (c<sub>v</sub> at the edge of the search), the c<sub>v</sub> searched (T at
+ * the last reading 10<sup>-4</sup> to 10<sup>7</sup>) is not a finite positive double for this
+ * drainage path and these times (H<sub>dr</sub><sup>2</sup> beyond the range of doubles), the
+ * optimiser failed from every start (the message adds that primary consolidation seems far from
+ * complete where the best start puts T at the last reading below 0.2: such readings follow U = 2
+ * &radic;(T/&pi;) and fix only d<sub>p</sub> &radic;c<sub>v</sub>), or c<sub>v</sub> is not
+ * determined: its interval covers every c<sub>v</sub> searched, or an end of it lies outside the
+ * normal double range (below 2.2 x 10<sup>-308</sup> m<sup>2</sup>/s, or above the largest value
+ * that is finite in m<sup>2</sup>/yr).
  *
  * <p>Deterministic (same readings, same bits) and thread-safe. Results feed engineering decisions
  * and must be reviewed by a qualified engineer; local codes and standards govern.
@@ -503,19 +505,18 @@ public final class FullCurveMethod {
               FitWarning.Kind.PARAMETER_AT_BOUND,
               "the secondary slope is at its bound 0: no secondary compression is seen"));
     }
+    // The spread is finite: the refusal above leaves an interval that misses one end of the search
+    // range, ln c_v - halfWidth > lowestLogCv or ln c_v + halfWidth < highestLogCv, with ln c_v
+    // inside that range; so halfWidth is below its width, ln(HIGHEST_END_FACTOR /
+    // LOWEST_END_FACTOR) = ln 1e11, and cvHigh / cvLow = exp(2 halfWidth) < 1e22.
     double spread = cvHigh / cvLow;
     if (spread > 2) {
-      // The two ends are finite, their ratio may not be (an interval over 308 decades wide).
-      String factor =
-          spread < Double.POSITIVE_INFINITY
-              ? Checks.format("%.3g", spread)
-              : Checks.format("more than %.3g", Double.MAX_VALUE);
       warnings.add(
           new FitWarning(
               FitWarning.Kind.WIDE_INTERVAL,
               Checks.format(
-                  "the %.0f %% interval of c_v spans a factor of %s (%.4g to %.4g m^2/s)",
-                  100 * options.confidenceLevel(), factor, cvLow, cvHigh)));
+                  "the %.0f %% interval of c_v spans a factor of %.3g (%.4g to %.4g m^2/s)",
+                  100 * options.confidenceLevel(), spread, cvLow, cvHigh)));
     }
     double runsZ = runsTestZ(residuals);
     if (runsZ < RUNS_TEST_CRITICAL_Z) {

@@ -584,4 +584,48 @@ class FullCurveMethodTest {
           .hasMessageNotContaining("Infinity");
     }
   }
+
+  @Test
+  @DisplayName(
+      "Noisy lab curves (ConsolidationCurveModel plus 0.06 to 2 mm of Gaussian noise on 0.6 mm"
+          + " primary): every interval wider than a factor of 2 gets a WIDE_INTERVAL warning that"
+          + " quotes its finite ratio; an interval that is not refused misses one end of the c_v"
+          + " searched (T at the last reading 1e-4 to 1e7, class description), so its ratio stays"
+          + " below (1e7 / 1e-4)^2 = 1e22; refusals quote no infinity")
+  void wideIntervalQuotesAFiniteFactor() {
+    CurveParameters truth = CurveParameters.of(0.020e-3, 0.600e-3, 2 / YEAR, 0.030e-3);
+    int wide = 0;
+    for (double noise : new double[] {60e-6, 0.2e-3, 0.6e-3, 2e-3}) {
+      for (int seed = 1; seed <= 6; seed++) {
+        SettlementCurve c = curve(labSchedule(), truth, noise, new SplittableRandom(seed));
+        FullCurveResult r;
+        try {
+          r = FullCurveMethod.fit(c, DRAINAGE_PATH);
+        } catch (FitException e) {
+          assertThat(e.getMessage()).doesNotContain("Infinity").doesNotContain("NaN");
+          continue;
+        }
+        double spread = r.cvHigh() / r.cvLow();
+        List<String> messages =
+            r.warnings().stream()
+                .filter(w -> w.kind() == FitWarning.Kind.WIDE_INTERVAL)
+                .map(FitWarning::message)
+                .toList();
+        if (spread > 2) {
+          wide++;
+          assertThat(spread).as("noise %s, seed %d", noise, seed).isLessThan(1e22);
+          assertThat(messages)
+              .singleElement()
+              .asString()
+              .contains(String.format(java.util.Locale.ROOT, "a factor of %.3g (", spread))
+              .doesNotContain("Infinity")
+              .doesNotContain("NaN")
+              .doesNotContain("more than");
+        } else {
+          assertThat(messages).isEmpty();
+        }
+      }
+    }
+    assertThat(wide).as("curves with a wide interval").isGreaterThan(10);
+  }
 }

@@ -34,12 +34,20 @@ public enum Drainage {
   /**
    * Drainage path for a layer or specimen of the given thickness.
    *
+   * <p>H / 2 is rounded to the nearest double, as every division is, except at the smallest
+   * positive double ({@link Double#MIN_VALUE}, 4.9 x 10<sup>-324</sup> m): half of it lies exactly
+   * between 0 and {@link Double#MIN_VALUE}, and the division would round it to 0; the drainage path
+   * is then {@link Double#MIN_VALUE}, so that a positive thickness always gives a positive drainage
+   * path.
+   *
    * @param thicknessMetres thickness H of the layer or specimen, m; finite and &gt; 0
-   * @return H<sub>dr</sub> in m: H / 2 for {@link #DOUBLE}, H for {@link #SINGLE}
+   * @return H<sub>dr</sub> in m, finite and &gt; 0: H / 2 for {@link #DOUBLE}, H for {@link
+   *     #SINGLE}
    * @throws IllegalArgumentException if the thickness is not finite and positive
    */
   public double drainagePath(double thicknessMetres) {
     Messages.requirePositiveFinite("thickness", thicknessMetres, "m");
-    return thicknessMetres / drainedFaces;
+    // Only H = Double.MIN_VALUE halves to 0 (round half to even); every other positive H does not.
+    return Math.max(thicknessMetres / drainedFaces, Double.MIN_VALUE);
   }
 }

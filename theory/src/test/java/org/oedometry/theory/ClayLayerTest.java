@@ -79,7 +79,8 @@ class ClayLayerTest {
 
   @Test
   @DisplayName(
-      "Extreme but legal layers: U(0) = 0 on a 1e-200 m layer (H_dr^2 underflows), U(+inf) = 1"
+      "Extreme but legal layers: U(0) = 0 on a 1e-200 m layer (H_dr^2 underflows) and on the"
+          + " thinnest, Double.MIN_VALUE m (H_dr stays > 0), U(+inf) = 1"
           + " on a 1e200 m layer (H_dr^2 overflows), and t50 = T50 H_dr^2 / c_v (Terzaghi's"
           + " closed form, evaluated here in BigDecimal) on the 1e200 m layer")
   void extremeLayers() {
@@ -87,6 +88,14 @@ class ClayLayerTest {
     assertThat(thin.timeFactorAt(0)).isZero();
     assertThat(thin.degreeAt(0)).isZero();
     assertThat(thin.settlementAt(0)).isZero();
+    // The thinnest legal layer, 2^-1074 m (Double.MIN_VALUE), double drainage: T = c_v t / H_dr^2
+    // is 0 at t = 0 for any H_dr > 0 (Terzaghi's definition), so U(0) = 0. A drainage path of 0
+    // (half of 2^-1074 rounded to even) made it 0 / 0 = NaN.
+    ClayLayer thinnest = ClayLayer.of(Double.MIN_VALUE, Drainage.DOUBLE, 1e-8, 0.1);
+    assertThat(thinnest.drainagePath()).isPositive();
+    assertThat(thinnest.timeFactorAt(0)).isZero();
+    assertThat(thinnest.degreeAt(0)).isZero();
+    assertThat(thinnest.settlementAt(0)).isZero();
     ClayLayer thick = ClayLayer.of(1e200, Drainage.DOUBLE, 1e300, 0.1);
     assertThat(thick.degreeAt(Double.POSITIVE_INFINITY)).isEqualTo(1.0);
     java.math.BigDecimal path = new java.math.BigDecimal(thick.drainagePath());

@@ -3,7 +3,9 @@ package org.oedometry.core.io;
 import java.io.IOException;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -88,11 +90,29 @@ public final class OedometerTestCsvReader {
    *
    * @param directory the directory
    * @return the test
-   * @throws IOException if a file cannot be read (missing, unreadable)
+   * @throws IOException if the directory or a file cannot be read (missing, not a directory, a
+   *     directory where a file should be, unreadable): always a {@link FileSystemException} whose
+   *     {@link FileSystemException#getFile() file} and message name the path (a {@link
+   *     NoSuchFileException} where it does not exist), with the JDK's exception as the cause where
+   *     the JDK's own did not name the path
    * @throws TestDataException if a file is not UTF-8 text or does not describe a valid test; the
    *     source named is the file's path
    */
   public static OedometerTest read(Path directory) throws IOException {
+    if (Files.notExists(directory)) {
+      throw new NoSuchFileException(directory.toString(), null, "no such directory");
+    }
+    if (Files.exists(directory) && !Files.isDirectory(directory)) {
+      throw new FileSystemException(
+          directory.toString(),
+          null,
+          "not a directory: a test is read from the directory holding "
+              + CsvTables.PROPERTIES_FILE
+              + ", "
+              + CsvTables.INCREMENTS_FILE
+              + " and "
+              + CsvTables.READINGS_FILE);
+    }
     Path properties = directory.resolve(CsvTables.PROPERTIES_FILE);
     Path increments = directory.resolve(CsvTables.INCREMENTS_FILE);
     Path readings = directory.resolve(CsvTables.READINGS_FILE);
@@ -105,12 +125,35 @@ public final class OedometerTestCsvReader {
         readText(readings));
   }
 
+  /**
+   * The text of one file. The JDK names the file in a {@link FileSystemException} (missing, access
+   * denied) but not in every IOException (reading a directory gives a bare "Is a directory" on
+   * Linux): those are wrapped in a FileSystemException that names the file.
+   */
   private static String readText(Path file) throws IOException {
     try {
       return Files.readString(file, StandardCharsets.UTF_8);
     } catch (CharacterCodingException e) {
       throw new TestDataException(file.toString(), 0, null, null, "not UTF-8 text", e);
+    } catch (FileSystemException e) {
+      if (e.getFile() != null) {
+        throw e;
+      }
+      throw named(file, e);
+    } catch (IOException e) {
+      throw named(file, e);
     }
+  }
+
+  /** A FileSystemException naming the file, with the JDK's reason and exception as the cause. */
+  private static FileSystemException named(Path file, IOException cause) {
+    String reason =
+        Files.isDirectory(file)
+            ? "is a directory, not a file"
+            : cause.getMessage() == null ? cause.getClass().getSimpleName() : cause.getMessage();
+    FileSystemException named = new FileSystemException(file.toString(), null, reason);
+    named.initCause(cause);
+    return named;
   }
 
   /**
@@ -146,7 +189,8 @@ public final class OedometerTestCsvReader {
         readIncrements(
             CsvTable.parse(incrementsName, incrementsText, INCREMENT, INCREMENTS_HEADER));
     CsvTable readingsTable = CsvTable.parse(readingsName, readingsText, INCREMENT, READINGS_HEADER);
-    List<SettlementCurve> curves = readCurves(readingsTable, increments, properties);
+    List<SettlementCurve> curves =
+        readCurves(readingsTable, increments, incrementsName, properties);
     List<LoadIncrement> loadIncrements = new ArrayList<>();
     for (int i = 0; i < increments.size(); i++) {
       IncrementRow row = increments.get(i);
@@ -344,8 +388,18 @@ public final class OedometerTestCsvReader {
 
   // ---------------------------------------------------------------- increments
 
-  /** One row of the increments file, in SI units. */
-  private record IncrementRow(long line, double before, double after, double deflection) {}
+  /**
+   * One row of the increments file, in SI units: the apparatus deflection (0 without the column),
+   * its cell as written (null without the column) and its change from the increment before (from 0
+   * for the first), finite.
+   */
+  private record IncrementRow(
+      long line,
+      double before,
+      double after,
+      double deflection,
+      String deflectionCell,
+      double deflectionChange) {}
 
   private static List<IncrementRow> readIncrements(CsvTable table) {
     List<String> header = table.header().cells();
@@ -427,15 +481,27 @@ public final class OedometerTestCsvReader {
                   Checks.number(previousAfter)));
         }
       }
+      String deflectionCell = deflectionColumn < 0 ? null : row.cells().get(deflectionColumn);
       double deflection =
           deflectionColumn < 0
               ? 0
               : table.si(
-                  row,
-                  header.get(deflectionColumn),
-                  row.cells().get(deflectionColumn),
-                  units[deflectionColumn]);
-      rows.add(new IncrementRow(row.line(), before, after, deflection));
+                  row, header.get(deflectionColumn), deflectionCell, units[deflectionColumn]);
+      // The first change is the deflection itself (finite); a later one is a difference of two
+      // finite values, which may leave the range of a double.
+      IncrementRow previous = rows.isEmpty() ? null : rows.get(rows.size() - 1);
+      double change = deflection - (previous == null ? 0 : previous.deflection);
+      if (!Double.isFinite(change)) {
+        throw table.error(
+            row,
+            header.get(deflectionColumn),
+            deflectionCell,
+            Checks.format(
+                "the change from the apparatus deflection of increment %d (line %d, value '%s') is"
+                    + " beyond the range of a double",
+                rows.size(), previous.line, CsvTable.shorten(previous.deflectionCell)));
+      }
+      rows.add(new IncrementRow(row.line(), before, after, deflection, deflectionCell, change));
     }
     return rows;
   }
@@ -451,7 +517,7 @@ public final class OedometerTestCsvReader {
   // ---------------------------------------------------------------- readings
 
   private static List<SettlementCurve> readCurves(
-      CsvTable table, List<IncrementRow> increments, Properties properties) {
+      CsvTable table, List<IncrementRow> increments, String incrementsName, Properties properties) {
     List<String> header = table.header().cells();
     long line = table.header().line();
     if (header.size() != 3) {
@@ -503,10 +569,10 @@ public final class OedometerTestCsvReader {
     }
     int n = increments.size();
     List<List<double[]>> perIncrement = new ArrayList<>();
-    List<Row> lastRow = new ArrayList<>();
+    List<List<Row>> rowsPerIncrement = new ArrayList<>();
     for (int i = 0; i < n; i++) {
       perIncrement.add(new ArrayList<>());
-      lastRow.add(null);
+      rowsPerIncrement.add(new ArrayList<>());
     }
     int current = 0;
     for (Row row : table.rows()) {
@@ -535,7 +601,8 @@ public final class OedometerTestCsvReader {
       if (!(t >= 0)) {
         throw table.error(row, timeName, timeCell, "elapsed time must be >= 0");
       }
-      Row previous = lastRow.get(number - 1);
+      List<Row> rows = rowsPerIncrement.get(number - 1);
+      Row previous = rows.isEmpty() ? null : rows.get(rows.size() - 1);
       List<double[]> readings = perIncrement.get(number - 1);
       if (previous != null) {
         double tPrevious = readings.get(readings.size() - 1)[0];
@@ -556,7 +623,7 @@ public final class OedometerTestCsvReader {
       }
       double value = table.si(row, valueName, row.cells().get(2), valueUnit);
       readings.add(new double[] {t, value});
-      lastRow.set(number - 1, row);
+      rows.add(row);
     }
     if (current < n) {
       throw new TestDataException(
@@ -568,7 +635,7 @@ public final class OedometerTestCsvReader {
       List<double[]> readings = perIncrement.get(i);
       if (readings.size() < 2) {
         throw table.error(
-            lastRow.get(i),
+            rowsPerIncrement.get(i).get(readings.size() - 1),
             INCREMENT,
             String.valueOf(i + 1),
             "increment " + (i + 1) + " has 1 reading; a settlement curve needs at least 2");
@@ -582,27 +649,58 @@ public final class OedometerTestCsvReader {
       times.add(t);
       values.add(v);
     }
-    double[] deflection = new double[n];
+    // Settlement = (gauge travel from the start of the increment, or the settlement read) less the
+    // change of the apparatus deflection over the increment, as GaugeConversion.curves computes
+    // it; computed here reading by reading so that a value beyond the range of a double is
+    // refused with the line and the value as written.
+    GaugeConversion conversion =
+        gauge ? GaugeConversion.of(LabUnit.METRE, properties.gaugeDirection) : null;
+    double start = gauge ? properties.gaugeZeroMetres : 0;
+    List<SettlementCurve> curves = new ArrayList<>();
     for (int i = 0; i < n; i++) {
-      deflection[i] = increments.get(i).deflection;
-    }
-    try {
-      if (gauge) {
-        return GaugeConversion.of(LabUnit.METRE, properties.gaugeDirection)
-            .curves(properties.gaugeZeroMetres, times, values, deflection);
-      }
-      List<SettlementCurve> curves = new ArrayList<>();
-      for (int i = 0; i < n; i++) {
-        double change = deflection[i] - (i == 0 ? 0 : deflection[i - 1]);
-        double[] v = values.get(i);
-        for (int j = 0; j < v.length; j++) {
-          v[j] -= change;
+      IncrementRow increment = increments.get(i);
+      double[] v = values.get(i);
+      List<Row> rows = rowsPerIncrement.get(i);
+      double[] settlement = new double[v.length];
+      for (int j = 0; j < v.length; j++) {
+        Row row = rows.get(j);
+        String cell = row.cells().get(2);
+        double read;
+        if (gauge) {
+          try {
+            read = conversion.travelMetres(v[j], start);
+          } catch (IllegalArgumentException e) {
+            throw table.error(row, valueName, cell, e.getMessage());
+          }
+        } else {
+          read = v[j];
         }
-        curves.add(SettlementCurve.of(times.get(i), v));
+        settlement[j] = read - increment.deflectionChange;
+        if (!Double.isFinite(settlement[j])) {
+          throw table.error(
+              row,
+              valueName,
+              cell,
+              Checks.format(
+                  "%s (%s m) less the change of the apparatus deflection over increment %d (%s m,"
+                      + " %s line %d) is beyond the range of a double",
+                  gauge ? "the gauge travel" : "the settlement",
+                  Checks.number(read),
+                  i + 1,
+                  Checks.number(increment.deflectionChange),
+                  incrementsName,
+                  increment.line));
+        }
       }
-      return curves;
-    } catch (IllegalArgumentException e) {
-      throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+      if (gauge) {
+        start = v[v.length - 1];
+      }
+      try {
+        curves.add(SettlementCurve.of(times.get(i), settlement));
+      } catch (IllegalArgumentException e) {
+        throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+      }
     }
+    return curves;
   }
 }

@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -421,5 +422,99 @@ class OedometerTestCsvReaderTest {
             dir.resolve("readings.csv")
                 + " line 3, column settlement_mm, value 'x': not a"
                 + " decimal number");
+  }
+
+  @Test
+  @DisplayName(
+      "read(Path) names the path in every IOException: a directory where readings.csv should be,"
+          + " a regular file or a missing path given as the directory (java.nio.file"
+          + " FileSystemException: getFile() is the file involved, getMessage() starts with it)")
+  void readNamesThePathThatCannotBeRead(@TempDir Path dir) throws IOException {
+    Files.writeString(dir.resolve("properties.csv"), PROPERTIES, StandardCharsets.UTF_8);
+    Files.writeString(dir.resolve("increments.csv"), INCREMENTS, StandardCharsets.UTF_8);
+    Path readings = Files.createDirectory(dir.resolve("readings.csv"));
+    assertThatThrownBy(() -> OedometerTestCsvReader.read(dir))
+        .isInstanceOf(FileSystemException.class)
+        .hasMessage(readings + ": is a directory, not a file")
+        .hasCauseInstanceOf(IOException.class)
+        .satisfies(
+            e -> assertThat(((FileSystemException) e).getFile()).isEqualTo(readings.toString()));
+    Path file = dir.resolve("properties.csv");
+    assertThatThrownBy(() -> OedometerTestCsvReader.read(file))
+        .isInstanceOf(FileSystemException.class)
+        .hasMessageStartingWith(file + ": not a directory")
+        .satisfies(e -> assertThat(((FileSystemException) e).getFile()).isEqualTo(file.toString()));
+    Path missing = dir.resolve("no-such-folder");
+    assertThatThrownBy(() -> OedometerTestCsvReader.read(missing))
+        .isInstanceOf(NoSuchFileException.class)
+        .hasMessage(missing + ": no such directory")
+        .satisfies(
+            e -> assertThat(((FileSystemException) e).getFile()).isEqualTo(missing.toString()));
+  }
+
+  @Test
+  @DisplayName(
+      "apparatus deflections and readings near 1e308 m whose difference passes the largest double"
+          + " (about 1.8e308, IEEE 754): refused with the file, line, column and value as written"
+          + " (package documentation), never quoting Infinity (project rule)")
+  void deflectionBeyondTheDoubleRange() {
+    String settlements =
+        """
+        increment,elapsed_min,settlement_m
+        1,0,0
+        1,1,1e308
+        2,0,0
+        2,1,0.001
+        """;
+    // Change of deflection 1e308 m -> -1e308 m: -2e308 m.
+    assertBad(
+            PROPERTIES,
+            """
+            increment,stress_before_kPa,stress_after_kPa,apparatus_deflection_m
+            1,0,50,1e308
+            2,50,100,-1e308
+            """,
+            settlements)
+        .hasMessage(
+            "increments.csv line 3, column apparatus_deflection_m, value '-1e308': the change from"
+                + " the apparatus deflection of increment 1 (line 2, value '1e308') is beyond the"
+                + " range of a double")
+        .hasMessageNotContaining("Infinity");
+    // Settlement 1e308 m less a deflection change of -1e308 m: 2e308 m.
+    String increments =
+        """
+        increment,stress_before_kPa,stress_after_kPa,apparatus_deflection_m
+        1,0,50,-1e308
+        2,50,100,-1e308
+        """;
+    assertBad(PROPERTIES, increments, settlements)
+        .hasMessage(
+            "readings.csv line 3, column settlement_m, value '1e308': the settlement (1.0E308 m)"
+                + " less the change of the apparatus deflection over increment 1 (-1.0E308 m,"
+                + " increments.csv line 2) is beyond the range of a double")
+        .hasMessageNotContaining("Infinity");
+    // Gauge travel 1e308 m from a zero of 0 (the dial rises with compression), less -1e308 m.
+    String gaugeProperties =
+        PROPERTIES + "gauge_zero_m,0\ngauge_direction,increases_with_compression\n";
+    String gauge = settlements.replace("settlement_m", "gauge_m").replace("2,0,0", "2,0,1e308");
+    assertBad(gaugeProperties, increments, gauge)
+        .hasMessage(
+            "readings.csv line 3, column gauge_m, value '1e308': the gauge travel (1.0E308 m)"
+                + " less the change of the apparatus deflection over increment 1 (-1.0E308 m,"
+                + " increments.csv line 2) is beyond the range of a double")
+        .hasMessageNotContaining("Infinity");
+    // Gauge travel itself beyond the range: from 1e308 (the last reading of increment 1) to
+    // -1e308 in increment 2.
+    assertBad(
+            gaugeProperties,
+            increments
+                .replace("1,0,50,-1e308", "1,0,50,0")
+                .replace("2,50,100,-1e308", "2,50,100,0"),
+            gauge.replace("2,1,0.001", "2,1,-1e308"))
+        .hasMessage(
+            "readings.csv line 5, column gauge_m, value '-1e308': gauge travel from the reference"
+                + " reading (1.0E308 m) to the reading (-1.0E308 m) is beyond the range of a"
+                + " double")
+        .hasMessageNotContaining("Infinity");
   }
 }

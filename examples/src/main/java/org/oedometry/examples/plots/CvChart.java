@@ -21,8 +21,11 @@ import org.oedometry.fitting.CvMethod;
 /**
  * c<sub>v</sub> (m<sup>2</sup>/yr, Julian year, log scale) against the increment's mid stress (kPa,
  * log scale): one colour and marker shape per method; filled markers for normally consolidated
- * increments (and those crossing &sigma;'<sub>p</sub>), hollow markers for overconsolidated ones.
- * The legend names the methods and the meaning of filled and hollow.
+ * increments (and those crossing &sigma;'<sub>p</sub>), hollow markers for overconsolidated ones,
+ * and pale markers (filled with a light tint of the method's colour) for increments whose class is
+ * not known because no &sigma;'<sub>p</sub> was found (a test of a single increment, for one). The
+ * legend names the methods and the meaning of filled and hollow, and of pale where a point is drawn
+ * so.
  */
 public final class CvChart {
 
@@ -38,6 +41,7 @@ public final class CvChart {
    * @throws IllegalArgumentException if an argument or element is null, or there is no point
    */
   public static JFreeChart chart(List<CvPoint> points, String title) {
+    // Series of each method: 0 normally consolidated or crossing, 1 overconsolidated, 2 not known.
     if (points == null
         || title == null
         || points.stream().anyMatch(java.util.Objects::isNull)
@@ -53,24 +57,29 @@ public final class CvChart {
               m ->
                   new XYSeries[] {
                     new XYSeries(m.label() + " (NC)", true, true),
-                    new XYSeries(m.label() + " (OC)", true, true)
+                    new XYSeries(m.label() + " (OC)", true, true),
+                    new XYSeries(m.label() + " (not classed)", true, true)
                   });
-      pair[p.overconsolidated() ? 1 : 0].add(p.stress() / 1000.0, p.cv() * ClayYear.SECONDS);
+      int kind = p.stressHistory().isEmpty() ? 2 : p.overconsolidated() ? 1 : 0;
+      pair[kind].add(p.stress() / 1000.0, p.cv() * ClayYear.SECONDS);
     }
+    boolean anyNotClassed = points.stream().anyMatch(p -> p.stressHistory().isEmpty());
     XYSeriesCollection data = new XYSeriesCollection();
     XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(false, true);
     renderer.setUseOutlinePaint(false);
+    renderer.setUseFillPaint(true);
     LegendItemCollection legend = new LegendItemCollection();
     int series = 0;
     for (Map.Entry<CvMethod, XYSeries[]> entry : byMethod.entrySet()) {
       int index = entry.getKey().ordinal();
       Color colour = ChartFiles.PALETTE[index % ChartFiles.PALETTE.length];
       Shape shape = shape(index);
-      for (int oc = 0; oc < 2; oc++) {
-        data.addSeries(entry.getValue()[oc]);
+      for (int kind = 0; kind < 3; kind++) {
+        data.addSeries(entry.getValue()[kind]);
         renderer.setSeriesPaint(series, colour);
+        renderer.setSeriesFillPaint(series, kind == 2 ? pale(colour) : colour);
         renderer.setSeriesShape(series, shape);
-        renderer.setSeriesShapesFilled(series, oc == 0);
+        renderer.setSeriesShapesFilled(series, kind != 1);
         renderer.setSeriesStroke(series, ChartFiles.solid(1.5f));
         series++;
       }
@@ -78,7 +87,13 @@ public final class CvChart {
     }
     Shape circle = ChartFiles.dot(9);
     legend.add(
-        new LegendItem("filled: normally consolidated", null, null, null, circle, Color.GRAY));
+        new LegendItem(
+            "filled: normally consolidated (or crossing σ'p)",
+            null,
+            null,
+            null,
+            circle,
+            Color.GRAY));
     LegendItem hollow =
         new LegendItem(
             "hollow: overconsolidated",
@@ -97,6 +112,25 @@ public final class CvChart {
             ChartFiles.solid(1.5f),
             Color.GRAY);
     legend.add(hollow);
+    if (anyNotClassed) {
+      legend.add(
+          new LegendItem(
+              "pale: not classed (no σ'p found)",
+              null,
+              null,
+              null,
+              true,
+              circle,
+              true,
+              pale(Color.GRAY),
+              true,
+              Color.GRAY,
+              ChartFiles.solid(1.5f),
+              false,
+              circle,
+              ChartFiles.solid(1.5f),
+              Color.GRAY));
+    }
     LogAxis stressAxis = ChartFiles.logAxis("Mid-increment effective stress σ' (kPa), log scale");
     ChartFiles.logTicks(
         stressAxis, data.getDomainLowerBound(false), data.getDomainUpperBound(false));
@@ -124,6 +158,16 @@ public final class CvChart {
    */
   public static Path write(List<CvPoint> points, String title, Path file) {
     return ChartFiles.save(chart(points, title), file);
+  }
+
+  /** A light tint of a colour (a third of the way from white), for points not classed. */
+  static Color pale(Color colour) {
+    return new Color(
+        tint(colour.getRed()), tint(colour.getGreen()), tint(colour.getBlue()), colour.getAlpha());
+  }
+
+  private static int tint(int channel) {
+    return 255 - (255 - channel) / 3;
   }
 
   /** A marker shape per method: circle, square, up and down triangle, diamond, ... */

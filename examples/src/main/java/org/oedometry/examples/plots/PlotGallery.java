@@ -34,10 +34,11 @@ import org.oedometry.theory.Drainage;
  * directly: log-time, root-time and full-curve fits of each increment (each with the test's
  * drainage path rule, one fixed-point round where the rule needs d50), &sigma;'<sub>p</sub> by
  * every construction from the end-of-increment compression curve, m<sub>v</sub> with the increments
- * classed by the Casagrande &sigma;'<sub>p</sub>, k = c<sub>v</sub> m<sub>v</sub>
- * &gamma;<sub>w</sub> from the full-curve c<sub>v</sub>, C<sub>k</sub> over the normally
- * consolidated increments, and a field forecast for an invented layer with the c<sub>v</sub> of the
- * last loading increment.
+ * classed as the report classes them (by the first construction that found &sigma;'<sub>p</sub>;
+ * where none did, the increments are not classed and the c<sub>v</sub> chart draws them as such), k
+ * = c<sub>v</sub> m<sub>v</sub> &gamma;<sub>w</sub> from the full-curve c<sub>v</sub>,
+ * C<sub>k</sub> over the normally consolidated increments, and a field forecast for an invented
+ * layer with the c<sub>v</sub> of the last loading increment.
  *
  * <p>Run on the invented demo test: {@code mvn -B -q -pl examples -am compile exec:java
  * -Ddemo.mainClass=org.oedometry.examples.plots.PlotGallery -Dexec.args=examples/target/plots}. The
@@ -152,7 +153,7 @@ public final class PlotGallery {
                     report.preconsolidation(),
                     name + ": void ratio against effective stress",
                     folder.resolve("compression.png"))));
-    List<CvPoint> cvPoints = new ArrayList<>();
+    List<CvPoint> cvPoints = cvPoints(report);
     List<IncrementPermeability> permeability = new ArrayList<>();
     List<IncrementPermeability> normallyConsolidated = new ArrayList<>();
     for (IncrementReport increment : report.increments()) {
@@ -160,9 +161,6 @@ public final class PlotGallery {
         continue;
       }
       IncrementCompressibility compressibility = increment.compressibility().value().get();
-      for (MethodOutcome outcome : increment.methods()) {
-        outcome.estimate().ifPresent(e -> cvPoints.add(CvPoint.of(compressibility, e)));
-      }
       if (increment.preferredCv().isPresent() && compressibility.mv() > 0) {
         List<IncrementPermeability> k =
             Permeability.perIncrement(
@@ -198,6 +196,23 @@ public final class PlotGallery {
             "Field forecast: INVENTED 6 m clay layer, c_v of the test's last loading increment",
             folder.resolve("forecast.png")));
     return List.copyOf(written);
+  }
+
+  /**
+   * The points of the c_v chart: every method's c_v of every increment that has a compressibility,
+   * classed as the report classes the increment (not classed where the report found no σ'_p).
+   */
+  static List<CvPoint> cvPoints(TestReport report) {
+    List<CvPoint> points = new ArrayList<>();
+    for (IncrementReport increment : report.increments()) {
+      if (increment.compressibility().value().isEmpty()) {
+        continue;
+      }
+      for (MethodOutcome outcome : increment.methods()) {
+        outcome.estimate().ifPresent(e -> points.add(CvPoint.of(increment, e)));
+      }
+    }
+    return points;
   }
 
   /** σ'_p by every construction the library offers, in a fixed order. */

@@ -134,7 +134,13 @@ class ChartFilesTest {
       "One c_v point (a single increment): the c_v axis, ticked at powers of 2, still labels at"
           + " least two values (an axis with no label cannot be read)")
   void narrowLogAxisIsLabelled() {
-    CvPoint point = new CvPoint(35e3, 3 / ClayYear.SECONDS, CvMethod.LOG_TIME, false);
+    CvPoint point =
+        new CvPoint(
+            35e3,
+            3 / ClayYear.SECONDS,
+            CvMethod.LOG_TIME,
+            java.util.Optional.of(
+                org.oedometry.core.compressibility.IncrementClass.NORMALLY_CONSOLIDATED));
     ValueAxis axis = CvChart.chart(List.of(point), "one").getXYPlot().getRangeAxis();
     assertThat(labelled(axis, RectangleEdge.LEFT)).hasSizeGreaterThanOrEqualTo(2);
   }

@@ -39,9 +39,12 @@ import org.oedometry.fitting.RootTimeResult;
  * @param deformationBasis the settlement that placed this increment on the e &ndash; log &sigma;'
  *     curve
  * @param compressibility void ratios, a<sub>v</sub>, m<sub>v</sub> and mid-increment stresses of
- *     the increment, or why they are absent
+ *     the increment, or why they are absent; where no construction found &sigma;'<sub>p</sub>, the
+ *     class it carries ({@link IncrementCompressibility#stressHistory()}) is taken against the
+ *     largest stress of the test in its place and is not a finding: the increment's class is {@code
+ *     stressHistory}
  * @param stressHistory the class of the increment relative to &sigma;'<sub>p</sub> (OC or NC), or
- *     why it is absent
+ *     why it is absent (no construction found &sigma;'<sub>p</sub>, as for a single increment)
  * @param secondaryCompression C<sub>&alpha;e</sub>, C<sub>&alpha;&epsilon;</sub> and (for normally
  *     consolidated increments) C<sub>&alpha;</sub>/C<sub>c</sub>, or why they are absent
  * @param warnings typed warnings, empty when there is nothing to say
