@@ -340,7 +340,11 @@ public final class DemoTestGenerator {
       height -= curve.finalSettlementMetres();
       stressBefore = stressAfter;
     }
-    return OedometerTest.builder(specimen)
+    // The final water content a lab would weigh: the specimen saturated at the end (S_f = 1, so
+    // w_f = e_f / G_s), rounded to 0.1 %; it then checks the final state (Sf close to 1).
+    double finalVoidRatio = height / solidsHeight - 1;
+    double finalWaterContent = round(finalVoidRatio / SPECIFIC_GRAVITY, 1e-3);
+    return OedometerTest.builder(specimen.toBuilder().finalWaterContent(finalWaterContent).build())
         .drainage(Drainage.DOUBLE)
         .identifiers(
             TestIdentifiers.of("Demo riverside warehouse (invented)", "BH-D1", "U4", "6.2 m"))

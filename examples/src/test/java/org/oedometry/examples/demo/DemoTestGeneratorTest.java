@@ -76,6 +76,21 @@ class DemoTestGeneratorTest {
   }
 
   @Test
+  @DisplayName(
+      "The demo specimen's phases agree: w_f is the water a saturated final state holds (S e = w"
+          + " G_s) to its 0.1 % rounding, and the test carries no data warning")
+  void phasesAgree() {
+    double wf = TEST.specimen().finalWaterContent().getAsDouble();
+    // Water filling the final voids, by volumes: (H_f - H_s) A rho_w over the dry mass.
+    double area = TEST.specimen().areaSquareMetres();
+    double water = (TEST.finalHeightMetres() - TEST.heightOfSolidsMetres()) * area * 1000;
+    assertThat(wf)
+        .isCloseTo(water / TEST.specimen().dryMassKilograms().getAsDouble(), within(5e-4));
+    assertThat(TEST.finalDegreeOfSaturation().getAsDouble()).isCloseTo(1.0, within(5e-4 / wf));
+    assertThat(TEST.warnings()).isEmpty();
+  }
+
+  @Test
   @DisplayName("Every file and the identifiers say the data are invented")
   void marksTheDataInvented() throws IOException {
     CsvTables committed = committed();
