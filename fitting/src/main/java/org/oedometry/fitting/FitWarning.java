@@ -32,7 +32,11 @@ public record FitWarning(Kind kind, String message) {
     LINE_CHOICE_NOT_SETTLED,
     /** The readings keep rising well beyond the implied d100 (strong secondary compression). */
     CURVE_RISES_BEYOND_D100,
-    /** A fitted parameter sits on its bound (no primary, or no secondary compression). */
+    /**
+     * A fitted parameter sits on its bound: the full curve's secondary slope at 0 (no secondary
+     * compression is seen). A primary settlement at its bound 0 is refused instead ({@link
+     * FitException}: c<sub>v</sub> would not describe consolidation).
+     */
     PARAMETER_AT_BOUND,
     /** The confidence interval of c<sub>v</sub> spans more than a factor of 2. */
     WIDE_INTERVAL,

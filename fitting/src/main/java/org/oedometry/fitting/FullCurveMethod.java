@@ -12,6 +12,7 @@ import org.oedometry.fitting.internal.Checks;
 import org.oedometry.fitting.internal.WeightedLeastSquares;
 import org.oedometry.theory.ConsolidationCurveModel;
 import org.oedometry.theory.CurveParameters;
+import org.oedometry.theory.Terzaghi;
 
 /**
  * Least-squares fit of the whole time-settlement curve of one increment to Terzaghi's theory with
@@ -72,8 +73,8 @@ import org.oedometry.theory.CurveParameters;
  *
  * <h2>Warnings and errors</h2>
  *
- * Warnings: swelling increment, parameter at a bound, interval wider than a factor of 2 (an
- * interval that is not refused, see below, misses one end of the c<sub>v</sub> searched and so
+ * Warnings: swelling increment, secondary slope at its bound 0, interval wider than a factor of 2
+ * (an interval that is not refused, see below, misses one end of the c<sub>v</sub> searched and so
  * spans less than the square of its range, 10<sup>22</sup>), residuals with structure (a runs test
  * on their signs, z &lt; -2.58), primary consolidation incomplete (T at the last reading below 1
  * for the lower end of the c<sub>v</sub> interval: c<sub>v</sub> then rests on an unfinished curve
@@ -84,8 +85,11 @@ import org.oedometry.theory.CurveParameters;
  * of curves, on clean curves the warning appears in 2 to 4 %; the last reading of a lab schedule,
  * on which the secondary slope rests almost alone, is flagged only when far off. {@link
  * FitException}: the readings do not move, primary consolidation was over before the first reading
- * or is not seen at all (c<sub>v</sub> at the edge of the search), the c<sub>v</sub> searched (T at
- * the last reading 10<sup>-4</sup> to 10<sup>7</sup>) is not a finite positive double for this
+ * (c<sub>v</sub> at the fast edge of the search, or U above 99 % at the first reading, {@value
+ * #FIRST_READING_REMAINING_LIMIT} of d<sub>p</sub> left to see) or is not seen at all
+ * (c<sub>v</sub> at the slow edge of the search, or d<sub>p</sub> at its bound 0, where
+ * c<sub>v</sub> would rest only on the onset of the secondary term), the c<sub>v</sub> searched (T
+ * at the last reading 10<sup>-4</sup> to 10<sup>7</sup>) is not a finite positive double for this
  * drainage path and these times (H<sub>dr</sub><sup>2</sup> beyond the range of doubles), the
  * optimiser failed from every start (the message adds that primary consolidation seems far from
  * complete where the best start puts T at the last reading below 0.2: such readings follow U = 2
@@ -162,6 +166,14 @@ public final class FullCurveMethod {
   private static final int CURVE_POINTS = 100;
 
   private static final double RUNS_TEST_CRITICAL_Z = -2.576;
+
+  /**
+   * Fraction of primary consolidation still to come at the first reading below which the fit is
+   * refused: 0.01 (U &gt; 99 % there, T &gt; 1.78). The readings then see at most 1 % of
+   * d<sub>p</sub>, so d<sub>0</sub> and d<sub>p</sub> would be extrapolated a hundredfold; our
+   * choice, stated so it can be reviewed.
+   */
+  static final double FIRST_READING_REMAINING_LIMIT = 0.01;
 
   private FullCurveMethod() {}
 
@@ -473,6 +485,30 @@ public final class FullCurveMethod {
               HIGHEST_END_FACTOR));
     }
 
+    // As for a best fit at the fast edge of the search: a best fit inside the range that puts
+    // nearly all of primary consolidation before the first reading fits the readings with the last
+    // traces of the exponential tail, d_p (1 - U) = d_p (8 / pi^2) exp(-pi^2 T / 4), and d_p and
+    // d_i grow without physical meaning (seen: d_p = 2.6e9 m and d_i = -2.6e9 m on a 19 mm
+    // specimen).
+    double firstTimeFactor = cv * t[0] / pathSquared;
+    double remainingAtFirst = Terzaghi.remainingFraction(firstTimeFactor);
+    if (remainingAtFirst < FIRST_READING_REMAINING_LIMIT) {
+      throw new FitException(
+          Checks.format(
+              "primary consolidation was over before the first reading: the best fit puts U at"
+                  + " %.4f %% there (T = %.3g at t = %.4g s), so d0 and d_p would be extrapolated"
+                  + " from the last %.2g %% of primary: c_v cannot be found from these readings",
+              100 * (1 - remainingAtFirst), firstTimeFactor, t[0], 100 * remainingAtFirst));
+    }
+    if (p[1] == 0.0) {
+      // As for the trial c_v of the profile: without primary settlement c_v enters the fit only
+      // through the onset of the secondary term, T_s H^2 / c_v, which is no consolidation.
+      throw new FitException(
+          "no primary consolidation is seen in these readings: the best fit has no primary"
+              + " settlement (d_p at its bound 0), so c_v would rest only on where the secondary"
+              + " term begins");
+    }
+
     // 4. Statistics, warnings and the plotted curve.
     double rSquared = total > 0 ? 1 - sumSquares / total : 0.0;
     double endFactor = cv * lastTime / pathSquared;
@@ -492,12 +528,6 @@ public final class FullCurveMethod {
               FitWarning.Kind.SWELLING_INCREMENT,
               "settlement decreases (swelling): the fit used the magnitude; swelling c_v is"
                   + " usually reported for information only"));
-    }
-    if (p[1] == 0.0) {
-      warnings.add(
-          new FitWarning(
-              FitWarning.Kind.PARAMETER_AT_BOUND,
-              "the primary settlement is at its bound 0: no primary consolidation is seen"));
     }
     if (parameterCount == 4 && secondary == 0.0) {
       warnings.add(
