@@ -48,6 +48,13 @@ public record FitWarning(Kind kind, String message) {
      */
     PRIMARY_INCOMPLETE,
     /**
+     * The full-curve fit puts more than half of primary consolidation before the first reading (U
+     * above 50 % there): no reading supports the corrected zero, so d<sub>0</sub> and d<sub>p</sub>
+     * are extrapolated and c<sub>v</sub> rests on the later part of primary only. (Where less than
+     * 1 % of primary remains at the first reading the fit is refused.)
+     */
+    PRIMARY_BEFORE_FIRST_READING,
+    /**
      * A reading lies further from the fitted curve than the noise of the others allows (a wild
      * reading: a misread dial, a knock, a reading taken after the next load): check it; it pulls
      * the fit. With only one or two readings more than parameters, a wild reading can drag the fit

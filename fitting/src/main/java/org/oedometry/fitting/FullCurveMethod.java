@@ -76,18 +76,19 @@ import org.oedometry.theory.Terzaghi;
  * Warnings: swelling increment, secondary slope at its bound 0, interval wider than a factor of 2
  * (an interval that is not refused, see below, misses one end of the c<sub>v</sub> searched and so
  * spans less than the square of its range, 10<sup>22</sup>), residuals with structure (a runs test
- * on their signs, z &lt; -2.58), primary consolidation incomplete (T at the last reading below 1
- * for the lower end of the c<sub>v</sub> interval: c<sub>v</sub> then rests on an unfinished curve
- * and must not be used without review), fewer than half the starts at the best fit, outlying
- * readings (an externally studentized residual beyond the 1 % Bonferroni bound, with the leverage
- * of each reading taken into account; the warning names the readings). Measured on the invented
- * study curves: a reading 10 noise deviations off in the middle of the increment is flagged in 95 %
- * of curves, on clean curves the warning appears in 2 to 4 %; the last reading of a lab schedule,
- * on which the secondary slope rests almost alone, is flagged only when far off. {@link
- * FitException}: the readings do not move, primary consolidation was over before the first reading
- * (c<sub>v</sub> at the fast edge of the search, or U above 99 % at the first reading, {@value
- * #FIRST_READING_REMAINING_LIMIT} of d<sub>p</sub> left to see) or is not seen at all
- * (c<sub>v</sub> at the slow edge of the search, or d<sub>p</sub> at its bound 0, where
+ * on their signs, z &lt; -2.58), more than half of primary consolidation before the first reading
+ * (U &gt; 50 % there: d<sub>0</sub> and d<sub>p</sub> are extrapolated), primary consolidation
+ * incomplete (T at the last reading below 1 for the lower end of the c<sub>v</sub> interval:
+ * c<sub>v</sub> then rests on an unfinished curve and must not be used without review), fewer than
+ * half the starts at the best fit, outlying readings (an externally studentized residual beyond the
+ * 1 % Bonferroni bound, with the leverage of each reading taken into account; the warning names the
+ * readings). Measured on the invented study curves: a reading 10 noise deviations off in the middle
+ * of the increment is flagged in 95 % of curves, on clean curves the warning appears in 2 to 4 %;
+ * the last reading of a lab schedule, on which the secondary slope rests almost alone, is flagged
+ * only when far off. {@link FitException}: the readings do not move, primary consolidation was over
+ * before the first reading (c<sub>v</sub> at the fast edge of the search, or U above 99 % at the
+ * first reading, {@value #FIRST_READING_REMAINING_LIMIT} of d<sub>p</sub> left to see) or is not
+ * seen at all (c<sub>v</sub> at the slow edge of the search, or d<sub>p</sub> at its bound 0, where
  * c<sub>v</sub> would rest only on the onset of the secondary term), the c<sub>v</sub> searched (T
  * at the last reading 10<sup>-4</sup> to 10<sup>7</sup>) is not a finite positive double for this
  * drainage path and these times (H<sub>dr</sub><sup>2</sup> beyond the range of doubles), the
@@ -174,6 +175,14 @@ public final class FullCurveMethod {
    * choice, stated so it can be reviewed.
    */
   static final double FIRST_READING_REMAINING_LIMIT = 0.01;
+
+  /**
+   * Fraction of primary consolidation still to come at the first reading below which the fit warns
+   * {@link FitWarning.Kind#PRIMARY_BEFORE_FIRST_READING}: 0.5 (U &gt; 50 % there, T &gt; 0.197).
+   * The log-time construction needs readings before 50 to 60 % consolidation for its corrected zero
+   * (Casagrande's parabola rule, FACTS.md); past that no reading supports d<sub>0</sub>.
+   */
+  static final double FIRST_READING_WARNING_REMAINING = 0.5;
 
   private FullCurveMethod() {}
 
@@ -569,6 +578,17 @@ public final class FullCurveMethod {
                       + " primary consolidation may not be complete, and c_v rests on an"
                       + " unfinished curve",
                   endFactor, lowEndFactor)));
+    }
+    if (remainingAtFirst < FIRST_READING_WARNING_REMAINING) {
+      warnings.add(
+          new FitWarning(
+              FitWarning.Kind.PRIMARY_BEFORE_FIRST_READING,
+              Checks.format(
+                  "the fit puts U at %.1f %% at the first reading (T = %.3g at t = %.4g s): most of"
+                      + " primary consolidation happened before it, so d0 and d_p are"
+                      + " extrapolated and c_v rests on the last %.1f %% of primary; earlier"
+                      + " readings would support them",
+                  100 * (1 - remainingAtFirst), firstTimeFactor, t[0], 100 * remainingAtFirst)));
     }
     List<double[]> outlying =
         outlyingReadings(t, residuals, sumSquares, w, model.curve(fitted), best, parameterCount);

@@ -95,22 +95,43 @@ class FullCurveWarningsTest {
 
   @Test
   @DisplayName(
-      "Exact curves whose first reading comes at T = 3 (1 - U = 8/pi^2 exp(-pi^2 T / 4) = 4.9e-4,"
-          + " the one-term series, FACTS.md) are refused as over before the first reading; at T ="
-          + " 1 (1 - U = 0.069) c_v comes back to 0.1 %")
-  void primaryOverBeforeTheFirstReading() {
+      "Exact curves with the first reading at T = 0.1, 0.5, 1 and 3 (U there 0.3568, 0.7640,"
+          + " 0.9313 from FACTS.md [exact], and 1 - 8/pi^2 exp(-pi^2 T / 4) = 0.99951 by the"
+          + " one-term series): refused where under 1 % of primary remains, warned"
+          + " PRIMARY_BEFORE_FIRST_READING where under half remains, c_v to 0.1 % otherwise")
+  void primaryBeforeTheFirstReading() {
     double first = LAB[0];
-    for (double firstT : new double[] {3.0, 1.0}) {
-      double remaining = 8 / (Math.PI * Math.PI) * Math.exp(-Math.PI * Math.PI * firstT / 4);
-      double cv = firstT * PATH * PATH / first;
+    double[] firstT = {0.1, 0.5, 1.0, 3.0};
+    double[] degree = {
+      0.3568234005,
+      0.7639503307,
+      0.931260,
+      1 - 8 / (Math.PI * Math.PI) * Math.exp(-Math.PI * Math.PI * 3 / 4)
+    };
+    for (int k = 0; k < firstT.length; k++) {
+      double remaining = 1 - degree[k];
+      double cv = firstT[k] * PATH * PATH / first;
       double[] d = settlements(LAB, CurveParameters.of(1e-5, 4e-4, cv, 4e-6));
+      String as = "first reading at T = " + firstT[k];
       if (remaining < FullCurveMethod.FIRST_READING_REMAINING_LIMIT) {
         assertThatThrownBy(() -> fit(LAB, d))
-            .as("first reading at T = %s", firstT)
+            .as(as)
             .isInstanceOf(FitException.class)
             .hasMessageContaining("primary consolidation was over before the first reading");
-      } else {
-        assertThat(fit(LAB, d).cv()).as("T = %s", firstT).isCloseTo(cv, within(1e-3 * cv));
+        continue;
+      }
+      FullCurveResult r = fit(LAB, d);
+      assertThat(r.cv()).as(as).isCloseTo(cv, within(1e-3 * cv));
+      boolean warned = r.hasWarning(FitWarning.Kind.PRIMARY_BEFORE_FIRST_READING);
+      assertThat(warned)
+          .as(as)
+          .isEqualTo(remaining < FullCurveMethod.FIRST_READING_WARNING_REMAINING);
+      if (warned) {
+        String percent = String.format(java.util.Locale.ROOT, "U at %.1f %%", 100 * degree[k]);
+        assertThat(r.warnings())
+            .filteredOn(w -> w.kind() == FitWarning.Kind.PRIMARY_BEFORE_FIRST_READING)
+            .singleElement()
+            .satisfies(w -> assertThat(w.message()).as(as).contains(percent));
       }
     }
     // Three stages (c_v 50, 1.7 and 0.056 m^2/yr) on the lab schedule: the best fit of one stage
