@@ -1,6 +1,7 @@
 package org.oedometry.fitting;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.internal.Checks;
@@ -28,23 +29,33 @@ import org.oedometry.theory.Terzaghi;
  * fixed number of equal steps (option, default 10: b<sub>1</sub> about 0.8, well away from 0 and 1
  * so that ln b<sub>1</sub> is well conditioned, whatever the reading schedule). The window is found
  * by iteration: the first window runs from the first reading past half of the movement between the
- * first and the last reading to the last reading; each fit gives c<sub>v </sub>, hence
- * t<sub>60</sub> and t<sub>95</sub>, hence the next window; until the window moves by less than
- * 10<sup>-9</sup> of itself (at most 30 times).
+ * first and the last reading to the first reading past 95 % of it; each fit gives c<sub>v </sub>,
+ * hence t<sub>60</sub> and t<sub>95</sub>, hence the next window; until the window moves by less
+ * than 10<sup>-9</sup> of itself (at most 30 times).
  *
  * <p><b>Equally spaced readings</b> (every step within 10<sup>-6</sup> of the first) are used as
  * they are: &Delta;t is the whole multiple of their spacing nearest to the window divided by the
- * number of steps, starting at the first reading in the window. <b>Other schedules are
- * resampled</b> at equal steps over the window by a monotone piecewise cubic Hermite interpolation
- * (Fritsch &amp; Carlson 1980) of settlement against ln t through all readings: it keeps the shape
- * of the curve (no overshoot between readings, monotone where the readings are), and on ln t the
- * curve is smooth at both ends; a warning says so.
+ * number of steps, starting at the first reading in the window, and the line is fitted to every
+ * pair of readings &Delta;t apart in the window (each reading with the one a step later), not only
+ * to the steps' own readings: a data logger's hundreds of readings average the noise that ten would
+ * leave. <b>Other schedules are resampled</b> at equal steps over the window by a monotone
+ * piecewise cubic Hermite interpolation (Fritsch &amp; Carlson 1980) of settlement against ln t
+ * through all readings: it keeps the shape of the curve (no overshoot between readings, monotone
+ * where the readings are), and on ln t the curve is smooth at both ends; a warning says so.
+ *
+ * <p><b>The line</b> is fitted by orthogonal (total) least squares: s<sub>n-1</sub> and
+ * s<sub>n</sub> are both readings with the same noise, and ordinary least squares of s<sub>n</sub>
+ * on s<sub>n-1</sub> flattens the line (regression dilution: b<sub>1</sub> low, c<sub>v</sub> high;
+ * measured +17 % on average on the noisy logger curves of the tests).
  *
  * <h2>Accuracy (measured; see the tests)</h2>
  *
  * <ul>
  *   <li>Exact Terzaghi curves read densely, log-spaced (resampled) or every 10 s for 24 h (as
  *       read): c<sub>v</sub> within 0.3 %; an instantaneous compression does not matter.
+ *   <li>Noisy readings every 10 s for 24 h (noise 0.5 to 3 % of d<sub>p</sub>, T at 24 h from 2 to
+ *       50, 200 seeded curves): 197 found, median error 2.0 %, 90th percentile 6.4 %, mean error
+ *       0.0 % (ordinary least squares on the same pairs: mean +17.5 %).
  *   <li>The usual 14 lab readings (0.1 min to 24 h): no value. With T at 24 h from 2 to 50 only 2
  *       or 3 readings lie between 60 % and 95 %, too few to resample honestly; FitException every
  *       time (tested). The method is meant for equally spaced or data-logger readings.
@@ -149,7 +160,16 @@ public final class AsaokaMethod {
         break;
       }
     }
+    // The first window ends where 95 % of the movement seen is reached (not at the last reading,
+    // where a fast curve leaves only flat, noisy readings with no slope to fit).
     double end = lastTime;
+    double mostOfTheMovement = d[0] + 0.95 * (d[n - 1] - d[0]);
+    for (int i = 0; i < n; i++) {
+      if (d[i] >= mostOfTheMovement && t[i] > start) {
+        end = t[i];
+        break;
+      }
+    }
     double startFactor = Terzaghi.timeFactor(WINDOW_START_DEGREE);
     double endFactor = Terzaghi.timeFactor(WINDOW_END_DEGREE);
     Sample sample = null;
@@ -161,7 +181,7 @@ public final class AsaokaMethod {
           equallySpaced
               ? pickReadings(t, d, start, end, options.steps())
               : resample(logT, d, start, end, options.steps());
-      fit = line(sample.values);
+      fit = line(sample.previous, sample.next);
       rate = -4 * Math.log(fit[1]) / (Math.PI * Math.PI * sample.step);
       double nextStart = startFactor / rate;
       double nextEnd = Math.min(lastTime, endFactor / rate);
@@ -188,7 +208,7 @@ public final class AsaokaMethod {
           equallySpaced
               ? pickReadings(t, d, start, end, options.steps())
               : resample(logT, d, start, end, options.steps());
-      fit = line(sample.values);
+      fit = line(sample.previous, sample.next);
       rate = -4 * Math.log(fit[1]) / (Math.PI * Math.PI * sample.step);
       double t60 = Math.max(t[0], startFactor / rate);
       if (Math.abs(sample.start() - t60) > UNSETTLED_WINDOW_TOLERANCE * t60) {
@@ -269,14 +289,14 @@ public final class AsaokaMethod {
     }
     double sign = readings.sign;
     List<PlotPoint> sampled = new ArrayList<>();
-    List<PlotPoint> pairs = new ArrayList<>();
-    double smallest = Double.POSITIVE_INFINITY;
     for (int j = 0; j < sample.values.length; j++) {
       sampled.add(new PlotPoint(sample.start + j * sample.step, sign * sample.values[j]));
-      if (j > 0) {
-        pairs.add(new PlotPoint(sign * sample.values[j - 1], sign * sample.values[j]));
-        smallest = Math.min(smallest, sample.values[j - 1]);
-      }
+    }
+    List<PlotPoint> pairs = new ArrayList<>();
+    double smallest = Double.POSITIVE_INFINITY;
+    for (int j = 0; j < sample.previous.length; j++) {
+      pairs.add(new PlotPoint(sign * sample.previous[j], sign * sample.next[j]));
+      smallest = Math.min(smallest, sample.previous[j]);
     }
     List<PlotPoint> drawn =
         List.of(
@@ -299,10 +319,24 @@ public final class AsaokaMethod {
         warnings);
   }
 
-  /** Settlements at equal steps: start time, step and values. */
-  private record Sample(double start, double step, double[] values) {
+  /**
+   * Settlements at equal steps (start time, step and values), and the pairs (s<sub>n-1</sub>,
+   * s<sub>n</sub>) the line is fitted to: consecutive values for resampled settlements, every pair
+   * of readings one step apart in the window for equally spaced readings.
+   */
+  private record Sample(
+      double start, double step, double[] values, double[] previous, double[] next) {
     double end() {
       return start + (values.length - 1) * step;
+    }
+
+    static Sample consecutive(double start, double step, double[] values) {
+      return new Sample(
+          start,
+          step,
+          values,
+          Arrays.copyOfRange(values, 0, values.length - 1),
+          Arrays.copyOfRange(values, 1, values.length));
     }
   }
 
@@ -316,7 +350,10 @@ public final class AsaokaMethod {
     return true;
   }
 
-  /** Equally spaced readings: every stride-th reading from the first in the window. */
+  /**
+   * Equally spaced readings: every stride-th reading from the first in the window as the sampled
+   * settlements, and as pairs every reading in the window with the one a stride later.
+   */
   private static Sample pickReadings(double[] t, double[] d, double start, double end, int steps) {
     int n = t.length;
     double spacing = (t[n - 1] - t[0]) / (n - 1);
@@ -337,7 +374,15 @@ public final class AsaokaMethod {
               values.size(), start, end));
     }
     double[] out = values.stream().mapToDouble(Double::doubleValue).toArray();
-    return new Sample(first < n ? t[first] : start, stride * spacing, out);
+    int last = first + (out.length - 1) * stride; // the last sampled reading
+    int pairCount = last - stride - first + 1;
+    double[] previous = new double[pairCount];
+    double[] next = new double[pairCount];
+    for (int j = 0; j < pairCount; j++) {
+      previous[j] = d[first + j];
+      next[j] = d[first + j + stride];
+    }
+    return new Sample(first < n ? t[first] : start, stride * spacing, out, previous, next);
   }
 
   /** Monotone cubic interpolation on ln t at steps + 1 equally spaced times. */
@@ -353,19 +398,21 @@ public final class AsaokaMethod {
     for (int j = 0; j <= steps; j++) {
       at[j] = Math.log(j == steps ? end : start + j * step);
     }
-    return new Sample(start, step, SmallFits.monotoneCubic(logT, d, at));
+    return Sample.consecutive(start, step, SmallFits.monotoneCubic(logT, d, at));
   }
 
-  /** {b0, b1} of s_n = b0 + b1 s_(n-1) by ordinary least squares. */
-  private static double[] line(double[] s) {
-    int pairs = s.length - 1;
-    double[] previous = new double[pairs];
-    double[] next = new double[pairs];
-    for (int j = 0; j < pairs; j++) {
-      previous[j] = s[j];
-      next[j] = s[j + 1];
-    }
-    double[] fit = SmallFits.line(previous, next);
+  /**
+   * {b0, b1} of s<sub>n</sub> = b<sub>0</sub> + b<sub>1</sub> s<sub>n-1</sub> by orthogonal (total)
+   * least squares: both coordinates are settlements read with the same noise, so the line that
+   * minimises the perpendicular distances is the consistent one (Deming regression with an error
+   * variance ratio of 1), b<sub>1</sub> = (S<sub>yy</sub> - S<sub>xx</sub> +
+   * &radic;((S<sub>yy</sub> - S<sub>xx</sub>)<sup>2</sup> + 4 S<sub>xy</sub><sup>2</sup>)) / (2
+   * S<sub>xy</sub>) with sums of squares and products about the means. Ordinary least squares of
+   * s<sub>n</sub> on s<sub>n-1</sub> is biased by the noise of s<sub>n-1</sub> (regression
+   * dilution): b<sub>1</sub> low, c<sub>v</sub> high.
+   */
+  static double[] line(double[] previous, double[] next) {
+    double[] fit = orthogonalLine(previous, next);
     if (fit == null || !(fit[1] > 0 && fit[1] < 1)) {
       throw new FitException(
           Checks.format(
@@ -374,5 +421,46 @@ public final class AsaokaMethod {
               fit == null ? "undefined" : Checks.format("%.6g", fit[1])));
     }
     return fit;
+  }
+
+  /** {intercept, slope} of the orthogonal-regression line, or null if it is undefined. */
+  static double[] orthogonalLine(double[] x, double[] y) {
+    int n = x.length;
+    if (n < 2) {
+      return null;
+    }
+    double meanX = 0;
+    double meanY = 0;
+    for (int i = 0; i < n; i++) {
+      meanX += x[i];
+      meanY += y[i];
+    }
+    meanX /= n;
+    meanY /= n;
+    double sxx = 0;
+    double syy = 0;
+    double sxy = 0;
+    for (int i = 0; i < n; i++) {
+      double dx = x[i] - meanX;
+      double dy = y[i] - meanY;
+      sxx += dx * dx;
+      syy += dy * dy;
+      sxy += dx * dy;
+    }
+    if (sxy == 0 || !Double.isFinite(sxy)) {
+      return null; // no direction: the pairs show no linear association
+    }
+    double difference = syy - sxx;
+    // The root of b1^2 Sxy - b1 (Syy - Sxx) - Sxy = 0 that minimises the perpendicular distances,
+    // written so that neither branch subtracts nearly equal numbers (either sign of Sxy).
+    double slope =
+        difference >= 0
+            ? (difference + Math.hypot(difference, 2 * sxy)) / (2 * sxy)
+            : 2 * sxy / (Math.hypot(difference, 2 * sxy) - difference);
+    double intercept = meanY - slope * meanX;
+    if (!Double.isFinite(slope) || !Double.isFinite(intercept)) {
+      return null;
+    }
+    return new double[] {intercept, slope};
   }
 }

@@ -27,7 +27,9 @@ import org.oedometry.fitting.internal.Checks;
  *     <sup>2</sup> / c<sub>v</sub>, s
  * @param resampled true if the settlements were interpolated, false if they are readings
  * @param sampledSettlements the equally spaced settlements used (x = t in s, y = m)
- * @param asaokaPoints the pairs (s<sub>n-1</sub>, s<sub>n</sub>), m
+ * @param asaokaPoints the pairs (s<sub>n-1</sub>, s<sub>n</sub>) the line was fitted to, m:
+ *     consecutive sampled settlements when resampled; for equally spaced readings every reading of
+ *     the window with the one a time step later (so more pairs than sampled settlements)
  * @param fittedLine the line over the pairs, from the smallest s<sub>n-1</sub> to the final
  *     settlement on the 45&deg; line (two points)
  * @param drainagePath H<sub>dr</sub> used, m
