@@ -18,6 +18,7 @@ import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.synthetic.ReadingSchedules;
 import org.oedometry.fitting.synthetic.SyntheticIncrement;
 import org.oedometry.fitting.synthetic.SyntheticReadings;
+import org.oedometry.theory.CurveParameters;
 import org.oedometry.theory.Terzaghi;
 
 class LogTimeMethodTest {
@@ -322,5 +323,106 @@ class LogTimeMethodTest {
     assertThatThrownBy(() -> LogTimeMethod.fit(tooFast, HDR))
         .isInstanceOf(FitException.class)
         .hasMessageMatching("(too few early readings|no inflection).*");
+  }
+
+  /**
+   * The time factor after which the exact curve's slope on the log-time plot, dU/dlog10 T = ln 10 T
+   * dU/dT, stays below 5 % of its slope at the inflection, 0.686845 per log10 cycle (FACTS.md
+   * [exact]): the strictest start of the secondary part in LogTimeMethod's documented rule. Found
+   * by bisection on Terzaghi.averageDegreeDerivative (theory module, checked against mpmath there);
+   * the slope falls monotonically between T = 1 and T = 5.
+   */
+  private static double secondaryStartTimeFactor() {
+    double target = 0.05 * 0.686845;
+    double lo = 1;
+    double hi = 5;
+    for (int i = 0; i < 100; i++) {
+      double mid = 0.5 * (lo + hi);
+      if (Math.log(10) * mid * Terzaghi.averageDegreeDerivative(mid) > target) {
+        lo = mid;
+      } else {
+        hi = mid;
+      }
+    }
+    return 0.5 * (lo + hi);
+  }
+
+  private static void assertFiniteMessage(FitWarning w) {
+    assertThat(w.message()).isNotBlank().doesNotContain("NaN").doesNotContain("Infinity");
+  }
+
+  @ParameterizedTest(name = "T at 24 h = {0}")
+  @ValueSource(doubles = {12, 24})
+  @DisplayName(
+      "FEW_SECONDARY_READINGS exactly when fewer than 3 readings lie past the start of the"
+          + " secondary part (counted here from each reading's T: the exact log-time slope below 5"
+          + " % of the inflection slope 0.686845 per cycle, FACTS.md [exact]); usual 14-reading"
+          + " schedule, T = 12 at 24 h leaves 2 (8 h and 24 h), T = 24 leaves 3 (4, 8, 24 h)")
+  void fewSecondaryReadings(double lastT) {
+    SyntheticIncrement model = Curves.terzaghi(DP, HDR, lastT);
+    double[] times = ReadingSchedules.usualLab();
+    LogTimeResult r = LogTimeMethod.fit(Curves.exact(model, times), HDR);
+    // Independent count: the T of each reading is lastT t / 24 h; the secondary part starts
+    // where the exact slope has fallen to 5 % of the tangent slope (T = 2.33).
+    double start = secondaryStartTimeFactor();
+    assertThat(start).isBetween(2.2, 2.5);
+    int after = 0;
+    for (double t : times) {
+      after += lastT * t / DAY > start ? 1 : 0;
+    }
+    assertThat(after).isEqualTo(lastT == 12 ? 2 : 3);
+    // The secondary line rests on exactly those readings (indices in the input, with the zero
+    // reading in front).
+    assertThat(r.geometry().secondaryTo() - r.geometry().secondaryFrom()).isEqualTo(after);
+    assertThat(r.hasWarning(FitWarning.Kind.FEW_SECONDARY_READINGS)).isEqualTo(after < 3);
+    if (after < 3) {
+      FitWarning w =
+          r.warnings().stream()
+              .filter(x -> x.is(FitWarning.Kind.FEW_SECONDARY_READINGS))
+              .findFirst()
+              .orElseThrow();
+      assertThat(w.message()).contains("secondary line").contains(after + " readings (3 wanted)");
+      assertFiniteMessage(w);
+    }
+    // Few secondary readings on an exact curve with no creep still give d100 near dp (the exact
+    // curve is flat after primary): within 1 % of dp.
+    assertThat(Math.abs(r.d100() - DP) / DP).isLessThan(0.01);
+  }
+
+  @ParameterizedTest(name = "T at the last reading = {0}")
+  @ValueSource(doubles = {3.5, 10})
+  @DisplayName(
+      "SHORT_SECONDARY_PART exactly when the readings after the start of the secondary part span"
+          + " less than 0.3 log cycle (span computed here from T: log10(3.5 / 2.33) = 0.18, log10(10"
+          + " / 2.33) = 0.63); data-logger readings, 20 a decade, exact curve without creep")
+  void shortSecondaryPart(double lastT) {
+    double cv = 2 / ExactCurves.YEAR;
+    SettlementCurve curve =
+        ExactCurves.curve(
+            ExactCurves.logTimes(cv, 1e-3, lastT, 20), CurveParameters.of(0, DP, cv, 0));
+    LogTimeResult r = LogTimeMethod.fit(curve, ExactCurves.DRAINAGE_PATH);
+    double span = Math.log10(lastT / secondaryStartTimeFactor());
+    boolean expected = span < LogTimeMethod.MINIMUM_SECONDARY_SPAN;
+    assertThat(expected).isEqualTo(lastT < 5);
+    assertThat(r.hasWarning(FitWarning.Kind.SHORT_SECONDARY_PART)).isEqualTo(expected);
+    if (expected) {
+      FitWarning w =
+          r.warnings().stream()
+              .filter(x -> x.is(FitWarning.Kind.SHORT_SECONDARY_PART))
+              .findFirst()
+              .orElseThrow();
+      assertThat(w.message()).contains("secondary part spanning 0.3 log cycles");
+      assertFiniteMessage(w);
+      // The documented fallback: a horizontal line at the level of the last readings, which on
+      // the exact curve is U(3.5) dp = 0.99986 dp (Terzaghi, one-term series, FACTS.md).
+      assertThat(r.secondarySlope()).isZero();
+      assertThat(r.d100() / DP).isCloseTo(Terzaghi.averageDegree(lastT), within(1e-3));
+    } else {
+      // A fitted line, not the horizontal fallback: the exact tail still falls slightly after T =
+      // 2.33 (its slope is below 5 % of 0.686845 dp per cycle there and decays).
+      assertThat(r.secondarySlope()).isNotZero();
+      assertThat(Math.abs(r.secondarySlope())).isLessThan(0.05 * 0.686845 * DP);
+    }
+    assertThat(relativeError(r.cv(), cv)).isLessThan(0.01);
   }
 }

@@ -26,7 +26,8 @@ import java.util.Optional;
  * 0.04, C<sub>c</sub> = 0.40, load ratio 2, transition 0.05 log cycle wide) the result lies 0 % to
  * 30 % above the break: a straight e &ndash; log&sigma;' virgin line is concave on log(1 + e), so
  * the late line is flatter than the curve just past the break. Absent when the envelope has fewer
- * than four points or no split gives a steeper late line. References: {@link
+ * than four points or no split gives a late line steeper beyond rounding (slopes that differ by
+ * less than 1e-9 of the larger count as equal). References: {@link
  * PreconsolidationMethod#BUTTERFIELD}, {@link PreconsolidationMethod#ONITSUKA}. Results feed
  * engineering decisions: they must be reviewed by a qualified engineer, and local codes and
  * standards govern. Stateless and thread-safe.
@@ -120,7 +121,7 @@ public final class BilinearVolumeMethod {
           env.idList(0, n),
           warnings);
     }
-    if (xi < x[bestSplit - 1] || xi > x[bestSplit]) {
+    if (TwoLineSplit.outsideGap(pressure, env.stress[bestSplit - 1], env.stress[bestSplit])) {
       warnings.add(
           new CompressibilityWarning(
               WarningKind.INTERSECTION_AWAY_FROM_BREAK,

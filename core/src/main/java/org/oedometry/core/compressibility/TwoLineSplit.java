@@ -7,11 +7,30 @@ import java.util.Optional;
  * with the least total residual sum of squares among the splits where the later line bends the
  * required way. Used by the bilinear and work methods of sigma'<sub>p</sub>.
  *
+ * <p>Rounding: two slopes that differ by no more than {@link #BEND_TOLERANCE} of the larger
+ * magnitude do not count as a bend, so collinear points (whose line fits differ by a few ulps) show
+ * none; and a meeting point within {@link #GAP_TOLERANCE} (relative) of an end of the gap between
+ * the groups counts as in the gap, so lines that meet at a point shared by both groups are not
+ * reported as meeting away from the break.
+ *
  * @param split index of the first point of the later line (2 &le; split &le; n - 2)
  * @param early least-squares line through points [0, split)
  * @param late least-squares line through points [split, n)
  */
 record TwoLineSplit(int split, LineFit early, LineFit late) {
+
+  /**
+   * Slopes that differ by no more than this fraction of the larger magnitude count as equal: the
+   * least-squares fits through collinear points differ by rounding (about 1e-15 relative), which
+   * must not decide a bend. Far below the bend of any measured curve.
+   */
+  static final double BEND_TOLERANCE = 1e-9;
+
+  /**
+   * A meeting stress within this fraction of an end of the gap between the groups counts as in the
+   * gap (rounding of the intersection of two fitted lines, about 1e-13 relative).
+   */
+  static final double GAP_TOLERANCE = 1e-9;
 
   /** Which way the later line must bend relative to the earlier one. */
   enum Bend {
@@ -44,8 +63,10 @@ record TwoLineSplit(int split, LineFit early, LineFit late) {
       } catch (IllegalArgumentException noLine) {
         continue;
       }
+      double change =
+          bend == Bend.DOWN ? early.slope() - late.slope() : late.slope() - early.slope();
       boolean bends =
-          bend == Bend.DOWN ? late.slope() < early.slope() : late.slope() > early.slope();
+          change > BEND_TOLERANCE * Math.max(Math.abs(early.slope()), Math.abs(late.slope()));
       if (!bends) {
         continue;
       }
@@ -56,6 +77,19 @@ record TwoLineSplit(int split, LineFit early, LineFit late) {
       }
     }
     return Optional.ofNullable(best);
+  }
+
+  /**
+   * Whether a meeting stress lies outside the gap between the two groups, beyond rounding.
+   *
+   * @param stress where the lines meet, Pa
+   * @param lastEarly stress of the last point of the early group, Pa, &gt; 0
+   * @param firstLate stress of the first point of the late group, Pa, &gt; lastEarly
+   * @return true if stress is below lastEarly or above firstLate by more than {@link
+   *     #GAP_TOLERANCE} of that stress
+   */
+  static boolean outsideGap(double stress, double lastEarly, double firstLate) {
+    return stress < lastEarly * (1 - GAP_TOLERANCE) || stress > firstLate * (1 + GAP_TOLERANCE);
   }
 
   /**

@@ -10,7 +10,10 @@ public enum WarningKind {
   OUTSIDE_TESTED_RANGE,
   /** A smoothing fit ended at a bound of its search range. */
   FIT_AT_BOUND,
-  /** Two construction lines meet outside the gap between the points each was fitted to. */
+  /**
+   * Two construction lines meet outside the gap between the points each was fitted to (by more than
+   * rounding: 1e-9 of the stress).
+   */
   INTERSECTION_AWAY_FROM_BREAK,
   /** A ratio falls outside the range published as typical (a check, not an error). */
   OUTSIDE_TYPICAL_RANGE

@@ -31,9 +31,11 @@ import java.util.Optional;
  * straddles the break, and the rounding of a smooth transition; in the tests both push it above the
  * break. See the tests for the tolerance achieved. Absent when the envelope has fewer than four
  * loaded points, the work is beyond the double range (stresses near 10<sup>308</sup> Pa), or no
- * split gives a steeper late line. Reference: {@link PreconsolidationMethod#BECKER_WORK}. Results
- * feed engineering decisions: they must be reviewed by a qualified engineer, and local codes and
- * standards govern. Stateless and thread-safe.
+ * split gives a late line steeper beyond rounding (so a single straight e &ndash; log&sigma;' line
+ * at a constant load ratio, whose W is exactly linear in &sigma;', shows no yield). Reference:
+ * {@link PreconsolidationMethod#BECKER_WORK}. Results feed engineering decisions: they must be
+ * reviewed by a qualified engineer, and local codes and standards govern. Stateless and
+ * thread-safe.
  */
 public final class WorkMethod {
 
@@ -130,7 +132,7 @@ public final class WorkMethod {
           used,
           warnings);
     }
-    if (pressure < x[bestSplit - 1] || pressure > x[bestSplit]) {
+    if (TwoLineSplit.outsideGap(pressure, x[bestSplit - 1], x[bestSplit])) {
       warnings.add(
           new CompressibilityWarning(
               WarningKind.INTERSECTION_AWAY_FROM_BREAK,

@@ -136,4 +136,27 @@ class BilinearVolumeMethodTest {
     PreconsolidationEstimate est = BilinearVolumeMethod.onitsuka(CompressionCurve.of(1.2, s, e));
     assertThat(est.pointsUsed()).containsExactly(0, 1, 2, 3, 4, 5, 8, 9, 10);
   }
+
+  @ParameterizedTest(name = "corner at {0} Pa")
+  @ValueSource(doubles = {25e3, 50e3, 100e3, 200e3, 400e3, 800e3})
+  @DisplayName(
+      "Regression: points on two straight lines in log(1 + e) - log s' whose corner is a test"
+          + " stress: the lines meet at that point, the edge of the gap between the groups, so no"
+          + " INTERSECTION_AWAY_FROM_BREAK (it was raised by rounding, 1e-15 past the edge)")
+  void cornerAtATestStressIsNotAwayFromTheBreak(double corner) {
+    // The corner point lies on both lines (built so), so both fitted lines pass through it.
+    CompressionCurve c = bilinearInLogVolume(corner);
+    for (PreconsolidationEstimate est :
+        new PreconsolidationEstimate[] {
+          BilinearVolumeMethod.onitsuka(c), BilinearVolumeMethod.butterfield(c)
+        }) {
+      assertThat(est.preconsolidationPressure().getAsDouble() / corner)
+          .as("%s", est.method())
+          .isCloseTo(1.0, within(1e-9));
+      assertThat(est.warnings())
+          .extracting(CompressibilityWarning::kind)
+          .as("%s", est.method())
+          .doesNotContain(WarningKind.INTERSECTION_AWAY_FROM_BREAK);
+    }
+  }
 }

@@ -7,6 +7,7 @@ import static org.assertj.core.api.Assertions.within;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 class WorkMethodTest {
@@ -105,5 +106,45 @@ class WorkMethodTest {
             estimate.preconsolidationPressure().isPresent() || !estimate.absenceReason().isEmpty())
         .isTrue();
     assertThat(estimate.points()).allMatch(p -> Double.isFinite(p.x()) && Double.isFinite(p.y()));
+  }
+
+  @ParameterizedTest(name = "corner at {0} Pa")
+  @ValueSource(doubles = {25e3, 50e3, 100e3, 200e3, 400e3})
+  @DisplayName(
+      "Regression: sharp two-line curve with its corner at a test stress (invented): the work lines"
+          + " meet at the corner, which is the edge of the gap between the two groups, so no"
+          + " INTERSECTION_AWAY_FROM_BREAK (it was raised by rounding, 1e-13 past the edge)")
+  void cornerAtATestStressIsNotAwayFromTheBreak(double corner) {
+    // Derived in the class documentation: with a constant load ratio W is a straight line in
+    // sigma' along each straight part of e - log sigma', and the corner point lies on both parts,
+    // so both work lines pass through it and meet there.
+    CompressionCurve c =
+        SyntheticCurves.curve(SyntheticCurves.DOUBLING_STRESSES, corner, 1.0, CR, CC, 0, 1e3);
+    PreconsolidationEstimate est = WorkMethod.estimate(c);
+    assertThat(est.preconsolidationPressure().getAsDouble() / corner).isCloseTo(1.0, within(1e-9));
+    assertThat(est.warnings())
+        .extracting(CompressibilityWarning::kind)
+        .doesNotContain(WarningKind.INTERSECTION_AWAY_FROM_BREAK, WarningKind.OUTSIDE_TESTED_RANGE);
+  }
+
+  @ParameterizedTest(name = "C = {0}, e0 = {1}")
+  @CsvSource({"0.02, 0.8", "0.02, 1.0", "0.04, 0.8", "0.04, 1.0", "0.1, 1.0", "0.1, 1.5"})
+  @DisplayName(
+      "Regression: one straight e - log sigma' line at a load ratio of 2 (no yield, invented): W"
+          + " is exactly linear in sigma', so no split bends and sigma'_p is absent (rounding of"
+          + " the line fits used to decide a bend and report a sigma'_p)")
+  void straightLineShowsNoYield(double index, double e0) {
+    // Derivation (trapezoidal rule of the class documentation): on e = e0 - C log10(s / 1 kPa)
+    // with s_j = 2 s_(j-1), each step adds (s_(j-1) + s_j) / 2 * C log10(2) / (1 + e0) = 1.5 k
+    // s_(j-1) with k = C log10(2) / (1 + e0), and s_1 + ... + s_(i-1) = s_i - s_1, so W_i = W_1 +
+    // 1.5 k (s_i - s_1): every point lies on one straight line.
+    double[] s = SyntheticCurves.DOUBLING_STRESSES;
+    double[] e = new double[s.length];
+    for (int i = 0; i < s.length; i++) {
+      e[i] = e0 - index * Math.log10(s[i] / 1e3);
+    }
+    PreconsolidationEstimate est = WorkMethod.estimate(CompressionCurve.of(e0, s, e));
+    assertThat(est.preconsolidationPressure()).isEmpty();
+    assertThat(est.absenceReason()).endsWith("the curve shows no yield");
   }
 }

@@ -6,17 +6,23 @@ import static org.assertj.core.api.Assertions.within;
 import java.util.List;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.oedometry.core.DrainagePathRule;
 import org.oedometry.core.LoadDirection;
 import org.oedometry.core.LoadIncrement;
 import org.oedometry.core.OedometerTest;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.core.TestIdentifiers;
 import org.oedometry.core.compressibility.DeformationBasis;
 import org.oedometry.core.compressibility.IncrementCompressibility;
 import org.oedometry.fitting.CvMethod;
 import org.oedometry.fitting.FitWarning;
 import org.oedometry.fitting.LogTimeMethod;
 import org.oedometry.fitting.LogTimeResult;
+import org.oedometry.fitting.synthetic.ReadingSchedules;
+import org.oedometry.theory.ConsolidationCurveModel;
+import org.oedometry.theory.CurveParameters;
 import org.oedometry.theory.Drainage;
 
 class TestReductionTest {
@@ -319,5 +325,86 @@ class TestReductionTest {
     assertThat(r.finalDegreeOfSaturation()).isEqualTo(t.finalDegreeOfSaturation()).isPresent();
     assertThat(REPORT.dataWarnings()).isEmpty();
     assertThat(REPORT.finalDegreeOfSaturation()).isEmpty();
+  }
+
+  private static final double PRIMARY = 0.5e-3;
+
+  /**
+   * One loading increment (100 to 200 kPa) of an exact Terzaghi curve with T = 10 at 24 h on the
+   * usual lab schedule (ConsolidationCurveModel, theory module, checked against mpmath there):
+   * primary 0.5 mm, an instantaneous compression and a secondary slope in multiples of it, and a
+   * zero reading (the reading before loading) at {@code zero} times the primary compression.
+   */
+  private static OedometerTest oneIncrement(double zero, double initial, double secondary) {
+    double[] times = ReadingSchedules.withZeroReading(ReadingSchedules.usualLab());
+    double dp = PRIMARY;
+    double path = Drainage.DOUBLE.drainagePath(ReductionFixtures.specimen().initialHeightMetres());
+    ConsolidationCurveModel model = ConsolidationCurveModel.of(path);
+    double cv = 10 * path * path / times[times.length - 1];
+    CurveParameters p = CurveParameters.of(initial * dp, dp, cv, secondary * dp);
+    double[] d = new double[times.length];
+    d[0] = zero * dp;
+    for (int k = 1; k < times.length; k++) {
+      d[k] = model.settlement(times[k], p);
+    }
+    return OedometerTest.builder(ReductionFixtures.specimen())
+        .identifiers(TestIdentifiers.of("Invented primary ratios, for tests", "BH-T3", "S3", "5 m"))
+        .increments(List.of(LoadIncrement.of(100e3, 200e3, SettlementCurve.of(times, d))))
+        .build();
+  }
+
+  @ParameterizedTest(name = "zero reading {0} dp, instantaneous {1} dp")
+  @CsvSource({"0, 1.5", "0, 0.5", "0, 0.05", "0.4, 0.05"})
+  @DisplayName(
+      "PRIMARY_RATIO_UNUSUAL exactly when the primary ratio r_p = 10 (d0 - d90) / (9 (ds - df))"
+          + " (FACTS.md, Craig [memory]), computed here from the generating curve, lies outside the"
+          + " documented default 0.5 to 1.0: a large instantaneous compression (0.40) and a late"
+          + " zero reading (1.49) are warned, 0.66 and 0.93 are not")
+  void primaryRatioOutsideTheUsualRange(double zero, double initial) {
+    double secondary = 0.03;
+    OedometerTest test = oneIncrement(zero, initial, secondary);
+    TestReport r =
+        TestReduction.reduce(
+            test,
+            ReductionOptions.builder()
+                .methods(List.of(CvMethod.LOG_TIME, CvMethod.ROOT_TIME))
+                .build());
+    IncrementReport inc = r.increments().get(0);
+    // Textbook ratio on dial readings, which fall as the specimen compresses (dial = -settlement):
+    // ds before loading, d0 the corrected zero (the instantaneous compression), d90 = d0 + 0.9
+    // dp, df the last reading (T = 10: U = 1 to 1e-10; secondary term s log10(1 + 10 / 2) of the
+    // model).
+    double ds = -zero * PRIMARY;
+    double d0 = -initial * PRIMARY;
+    double d90 = -(initial + 0.9) * PRIMARY;
+    double df = -(initial + 1 + secondary * Math.log10(1 + 10 / 2.0)) * PRIMARY;
+    double rp = 10 * (d0 - d90) / (9 * (ds - df));
+    // The construction estimates d0 and d100: within 3 % of the textbook value here.
+    LogTimeResult log = inc.logTime().orElseThrow();
+    assertThat(log.primaryRatio().getAsDouble() / rp - 1).isCloseTo(0, within(0.03));
+    ReductionOptions defaults = ReductionOptions.defaults();
+    assertThat(defaults.primaryRatioLow()).isEqualTo(0.5);
+    assertThat(defaults.primaryRatioHigh()).isEqualTo(1.0);
+    boolean unusual = rp < 0.5 || rp > 1.0;
+    // The four cases straddle both ends of the range, each at least 0.06 from it.
+    assertThat(Math.min(Math.abs(rp - 0.5), Math.abs(rp - 1.0))).isGreaterThan(0.06);
+    assertThat(inc.hasWarning(FitWarning.Kind.PRIMARY_RATIO_UNUSUAL)).isEqualTo(unusual);
+    if (unusual) {
+      ReductionWarning w =
+          inc.warnings().stream()
+              .filter(x -> x.kind() == FitWarning.Kind.PRIMARY_RATIO_UNUSUAL)
+              .findFirst()
+              .orElseThrow();
+      assertThat(w.method()).isEmpty();
+      assertThat(w.message())
+          .contains("primary compression ratio")
+          .contains("0.50 to 1.00")
+          .doesNotContain("NaN")
+          .doesNotContain("Infinity");
+      java.util.regex.Matcher m =
+          java.util.regex.Pattern.compile("ratio (\\d+\\.\\d{3}) lies").matcher(w.message());
+      assertThat(m.find()).as(w.message()).isTrue();
+      assertThat(Double.parseDouble(m.group(1)) / rp - 1).isCloseTo(0, within(0.03));
+    }
   }
 }
