@@ -24,8 +24,6 @@ public record FitWarning(Kind kind, String message) {
     FEW_SECONDARY_READINGS,
     /** The log-time secondary readings span too short a time to fix the line's slope. */
     SHORT_SECONDARY_PART,
-    /** t50 lies before the first reading and was extrapolated by the square-root law. */
-    T50_OUTSIDE_READINGS,
     /** The readings chosen for the root-time early line do not lie on a straight line. */
     EARLY_PART_NOT_LINEAR,
     /** The root-time choice of early readings did not settle to one set. */

@@ -69,9 +69,11 @@ import org.oedometry.fitting.internal.PreparedReadings;
  *       t<sub>1</sub>) interpolated in &radic;t; averaged; the estimate starts at the first reading
  *       and is iterated to a fixed point. If no reading qualifies the limit is relaxed to 60 %
  *       (error 0.39 %) with a warning; if none qualifies then, {@link FitException}.
- *   <li><b>t50</b> where the &radic;t interpolant reaches d50 = (d0 + d100)/2; before the first
- *       reading it is extrapolated by the square-root law with a warning. c<sub>v</sub> =
- *       T<sub>50</sub> H<sub>dr</sub><sup>2</sup> / t50.
+ *   <li><b>t50</b> where the &radic;t interpolant reaches d50 = (d0 + d100)/2. It cannot lie before
+ *       the first reading: every parabola pair has d(4t<sub>1</sub>) at or below its level (at most
+ *       60 % of the way from the previous d0 to d100), so d0 &ge; 2 d<sub>first</sub> - level, and
+ *       d50 &lt; d<sub>first</sub> would need that level, hence the previous d0, above d100.
+ *       c<sub>v</sub> = T<sub>50</sub> H<sub>dr</sub><sup>2</sup> / t50.
  * </ol>
  *
  * <p>Accuracy, measured in the tests: on exact Terzaghi curves c<sub>v</sub> within 0.5 % and d0
@@ -384,18 +386,10 @@ public final class LogTimeMethod {
     double d50 = 0.5 * (d0 + d100);
     double t50;
     if (d50 < ym[0]) {
-      if (!(ym[0] > d0)) {
-        throw new FitException("t50 lies before the first reading and cannot be extrapolated");
-      }
-      double ratio = (d50 - d0) / (ym[0] - d0);
-      t50 = t[0] * ratio * ratio;
-      warnings.add(
-          new FitWarning(
-              FitWarning.Kind.T50_OUTSIDE_READINGS,
-              Checks.format(
-                  "t50 (%s s) lies before the first reading (%s s): extrapolated by the"
-                      + " square-root law",
-                  t50, t[0])));
+      // Not reached (the class description shows why: the parabola rule keeps d0 at or above
+      // 2 d_first - level, with the level below d100); kept so that a broken invariant fails
+      // cleanly instead of giving a t50 outside the readings.
+      throw new FitException("t50 lies before the first reading: no t50 within the readings");
     } else if (d50 > ym[n - 1]) {
       throw new FitException("the curve does not reach d50: no honest t50");
     } else {
