@@ -36,7 +36,12 @@ public record FitWarning(Kind kind, String message) {
      * FitException}: c<sub>v</sub> would not describe consolidation).
      */
     PARAMETER_AT_BOUND,
-    /** The confidence interval of c<sub>v</sub> spans more than a factor of 2. */
+    /**
+     * c<sub>v</sub> is uncertain: the full curve's confidence interval spans more than a factor of
+     * 2; the root-time early line's slope, turned to the ends of its 95 % interval, moves
+     * c<sub>v</sub> by more than a factor of {@value RootTimeMethod#SLOPE_SENSITIVITY_LIMIT} (or
+     * finds no t90 at one end).
+     */
     WIDE_INTERVAL,
     /** The residuals run in long same-sign stretches: the model misses part of the curve. */
     RESIDUALS_SHOW_STRUCTURE,
