@@ -86,50 +86,22 @@ public final class CvChart {
       legend.add(new LegendItem(entry.getKey().label(), null, null, null, shape, colour));
     }
     Shape circle = ChartFiles.dot(9);
-    legend.add(
-        new LegendItem(
-            "filled: normally consolidated (or crossing σ'p)",
-            null,
-            null,
-            null,
-            circle,
-            Color.GRAY));
-    LegendItem hollow =
-        new LegendItem(
-            "hollow: overconsolidated",
-            null,
-            null,
-            null,
-            true,
-            circle,
-            false,
-            Color.GRAY,
-            true,
-            Color.GRAY,
-            ChartFiles.solid(1.5f),
-            false,
-            circle,
-            ChartFiles.solid(1.5f),
-            Color.GRAY);
-    legend.add(hollow);
-    if (anyNotClassed) {
+    // A legend entry for each kind of marker that is drawn.
+    if (points.stream().anyMatch(p -> p.stressHistory().isPresent() && !p.overconsolidated())) {
       legend.add(
           new LegendItem(
-              "pale: not classed (no σ'p found)",
+              "filled: normally consolidated (or crossing σ'p)",
               null,
               null,
               null,
-              true,
               circle,
-              true,
-              pale(Color.GRAY),
-              true,
-              Color.GRAY,
-              ChartFiles.solid(1.5f),
-              false,
-              circle,
-              ChartFiles.solid(1.5f),
               Color.GRAY));
+    }
+    if (points.stream().anyMatch(p -> p.stressHistory().isPresent() && p.overconsolidated())) {
+      legend.add(outlinedDot("hollow: overconsolidated", circle, false, Color.GRAY));
+    }
+    if (anyNotClassed) {
+      legend.add(outlinedDot("pale: not classed (no σ'p found)", circle, true, pale(Color.GRAY)));
     }
     LogAxis stressAxis = ChartFiles.logAxis("Mid-increment effective stress σ' (kPa), log scale");
     ChartFiles.logTicks(
@@ -198,5 +170,25 @@ public final class CvChart {
     }
     path.closePath();
     return path;
+  }
+
+  /** A legend entry drawn as a grey-outlined dot, filled with the given paint or hollow. */
+  private static LegendItem outlinedDot(String label, Shape dot, boolean filled, Color fill) {
+    return new LegendItem(
+        label,
+        null,
+        null,
+        null,
+        true,
+        dot,
+        filled,
+        fill,
+        true,
+        Color.GRAY,
+        ChartFiles.solid(1.5f),
+        false,
+        dot,
+        ChartFiles.solid(1.5f),
+        Color.GRAY);
   }
 }

@@ -67,8 +67,10 @@ class CvChartTest {
     assertThat(data.getSeries(1).getItemCount()).isZero();
     assertThat(data.getSeries(2).getItemCount()).isZero();
     LegendItemCollection legend = plot.getLegendItems();
-    assertThat(legend.getItemCount()).isEqualTo(3);
+    // The method, and the one kind of marker drawn (no hollow or pale entry without such points).
+    assertThat(legend.getItemCount()).isEqualTo(2);
     assertThat(legend.get(0).getLabel()).isEqualTo(CvMethod.FULL_CURVE.label());
+    assertThat(legend.get(1).getLabel()).startsWith("filled: normally consolidated");
   }
 
   @Test
