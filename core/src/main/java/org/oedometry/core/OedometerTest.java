@@ -376,15 +376,24 @@ public final class OedometerTest {
    */
   public List<DataWarning> warnings() {
     List<DataWarning> out = new ArrayList<>(specimen.warnings());
-    OptionalDouble w0 = specimen.initialWaterContent();
-    if (w0.isPresent()) {
-      saturationAbove(out, "initial", "S0", "w0", w0.getAsDouble(), "e0", initialVoidRatio());
+    OptionalDouble s0 = initialDegreeOfSaturation();
+    if (s0.isPresent()) {
+      saturationAbove(
+          out,
+          "initial",
+          "S0",
+          s0.getAsDouble(),
+          "w0",
+          specimen.initialWaterContent().getAsDouble(),
+          "e0",
+          initialVoidRatio());
     }
-    OptionalDouble wf = specimen.finalWaterContent();
-    if (wf.isPresent() && specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS) {
+    OptionalDouble finalSaturation = finalDegreeOfSaturation();
+    if (finalSaturation.isPresent()) {
+      OptionalDouble wf = specimen.finalWaterContent();
       double ef = voidRatioAtEnd(increments.size() - 1);
-      saturationAbove(out, "final", "Sf", "wf", wf.getAsDouble(), "ef", ef);
-      double sf = wf.getAsDouble() * specimen.specificGravity() / ef;
+      double sf = finalSaturation.getAsDouble();
+      saturationAbove(out, "final", "Sf", sf, "wf", wf.getAsDouble(), "ef", ef);
       if (sf < FINAL_SATURATION_WARNING_BELOW) {
         out.add(
             new DataWarning(
@@ -403,6 +412,7 @@ public final class OedometerTest {
     }
     OptionalDouble fromDensity = specimen.initialVoidRatioFromDensity();
     if (fromDensity.isPresent()) {
+      double w0 = specimen.initialWaterContent().getAsDouble(); // present with the density e0
       double e0 = initialVoidRatio();
       double other = fromDensity.getAsDouble();
       // Both void ratios are finite and > 0, so neither the difference nor 1 + e0 overflows.
@@ -416,30 +426,33 @@ public final class OedometerTest {
                         + " with w0 %s and Gs %s) differ by more than %s of 1 + e0: check the"
                         + " bulk density, the initial water content, the specimen's size and %s",
                     Checks.brief(e0),
-                    specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
-                        ? "with the dry mass"
-                        : "with the final water content",
+                    "with the " + solidsInput(),
                     Checks.brief(other),
-                    Checks.brief(w0.getAsDouble()),
+                    Checks.brief(w0),
                     Checks.brief(specimen.specificGravity()),
                     Checks.brief(VOID_RATIO_AGREEMENT),
-                    specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
-                        ? "the dry mass"
-                        : "the final water content")));
+                    "the " + solidsInput())));
       }
     }
     return List.copyOf(out);
+  }
+
+  /** What defines the solids, as the messages name it. */
+  private String solidsInput() {
+    return specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
+        ? "dry mass"
+        : "final water content";
   }
 
   private void saturationAbove(
       List<DataWarning> out,
       String which,
       String symbol,
+      double s,
       String waterSymbol,
       double waterContent,
       String voidSymbol,
       double voidRatio) {
-    double s = waterContent * specimen.specificGravity() / voidRatio;
     if (s > SATURATION_WARNING_ABOVE) {
       out.add(
           new DataWarning(
@@ -459,9 +472,7 @@ public final class OedometerTest {
                   voidSymbol,
                   Checks.brief(voidRatio),
                   Checks.brief(SATURATION_WARNING_ABOVE),
-                  specimen.solidsBasis() == Specimen.SolidsBasis.DRY_MASS
-                      ? "dry mass"
-                      : "final water content")));
+                  solidsInput())));
     }
   }
 

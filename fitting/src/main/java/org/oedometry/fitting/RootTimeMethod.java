@@ -207,7 +207,7 @@ public final class RootTimeMethod {
       throw new FitException(
           Checks.format("the construction gave no finite c_v (t90 = %s s)", t90));
     }
-    FitWarning uncertain = slopeUncertainty(x, y, ym, curve, line, factor, k, cv, t90);
+    FitWarning uncertain = slopeUncertainty(x, ym, curve, line, factor, k, cv, t90);
     if (uncertain != null) {
       warnings.add(uncertain);
     }
@@ -264,7 +264,6 @@ public final class RootTimeMethod {
    */
   private static FitWarning slopeUncertainty(
       double[] x,
-      double[] y,
       double[] ym,
       MonotoneCubic curve,
       LineFit line,
