@@ -423,12 +423,42 @@ public final class AsaokaMethod {
     return fit;
   }
 
-  /** {intercept, slope} of the orthogonal-regression line, or null if it is undefined. */
+  /**
+   * {intercept, slope} of the orthogonal-regression line, or null if it is undefined. The points
+   * are scaled by a power of 2 (exact) so that the largest coordinate is near 1: the sums of
+   * squares neither overflow nor underflow for settlements of any magnitude, and the slope is the
+   * same to the bit as without the scaling wherever that did not matter.
+   */
   static double[] orthogonalLine(double[] x, double[] y) {
     int n = x.length;
     if (n < 2) {
       return null;
     }
+    double largest = 0;
+    for (int i = 0; i < n; i++) {
+      largest = Math.max(largest, Math.max(Math.abs(x[i]), Math.abs(y[i])));
+    }
+    if (!(largest > 0) || !Double.isFinite(largest)) {
+      return null;
+    }
+    int exponent = Math.getExponent(largest);
+    double[] xs = new double[n];
+    double[] ys = new double[n];
+    for (int i = 0; i < n; i++) {
+      xs[i] = Math.scalb(x[i], -exponent);
+      ys[i] = Math.scalb(y[i], -exponent);
+    }
+    double[] line = scaledOrthogonalLine(xs, ys);
+    if (line == null) {
+      return null;
+    }
+    double intercept = Math.scalb(line[0], exponent);
+    return Double.isFinite(intercept) ? new double[] {intercept, line[1]} : null;
+  }
+
+  /** {@link #orthogonalLine} on points whose largest coordinate is near 1. */
+  private static double[] scaledOrthogonalLine(double[] x, double[] y) {
+    int n = x.length;
     double meanX = 0;
     double meanY = 0;
     for (int i = 0; i < n; i++) {

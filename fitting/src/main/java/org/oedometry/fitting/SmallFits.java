@@ -215,7 +215,8 @@ final class SmallFits {
       slope[1] = secant[0];
     } else {
       for (int k = 1; k < n - 1; k++) {
-        if (secant[k - 1] * secant[k] > 0) {
+        // Same sign, by the signs themselves: the product of two tiny secants underflows to 0.
+        if (Math.signum(secant[k - 1]) * Math.signum(secant[k]) > 0) {
           double w1 = 2 * h[k] + h[k - 1];
           double w2 = h[k] + 2 * h[k - 1];
           slope[k] = (w1 + w2) / (w1 / secant[k - 1] + w2 / secant[k]);
