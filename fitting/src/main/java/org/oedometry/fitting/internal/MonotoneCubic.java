@@ -72,7 +72,8 @@ public final class MonotoneCubic {
       d[1] = delta[0];
     } else {
       for (int k = 1; k < n - 1; k++) {
-        if (delta[k - 1] * delta[k] > 0) {
+        // Same sign, by the signs themselves: the product of two tiny slopes underflows to 0.
+        if (Math.signum(delta[k - 1]) * Math.signum(delta[k]) > 0) {
           double parabolic = (h[k] * delta[k - 1] + h[k - 1] * delta[k]) / (h[k - 1] + h[k]);
           double bound = 3 * Math.min(Math.abs(delta[k - 1]), Math.abs(delta[k]));
           d[k] = Math.copySign(Math.min(Math.abs(parabolic), bound), delta[k]);
