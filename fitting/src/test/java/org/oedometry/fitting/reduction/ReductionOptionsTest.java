@@ -87,4 +87,43 @@ class ReductionOptionsTest {
     assertThatThrownBy(() -> ReductionOptions.builder().deformationBasis(null).build())
         .isInstanceOf(NullPointerException.class);
   }
+
+  @Test
+  @DisplayName(
+      "Infinite and out-of-range numbers are refused too, each naming the field; options that"
+          + " differ in any one field are not equal")
+  void refusesInfinitiesAndComparesEveryField() {
+    assertThatThrownBy(
+            () -> ReductionOptions.builder().waterUnitWeight(Double.POSITIVE_INFINITY).build())
+        .hasMessageContaining("unit weight of water (Infinity N/m^3) must be finite and > 0");
+    assertThatThrownBy(() -> ReductionOptions.builder().waterUnitWeight(0).build())
+        .hasMessageContaining("unit weight of water (0.0 N/m^3)");
+    assertThatThrownBy(
+            () -> ReductionOptions.builder().disagreementFactor(Double.POSITIVE_INFINITY).build())
+        .hasMessageContaining("disagreement factor (Infinity) must be finite and > 1");
+    assertThatThrownBy(() -> ReductionOptions.builder().usualPrimaryRatio(-0.1, 0.5).build())
+        .hasMessageContaining("-0.1 to 0.5");
+    assertThatThrownBy(
+            () ->
+                ReductionOptions.builder().usualPrimaryRatio(0.5, Double.POSITIVE_INFINITY).build())
+        .hasMessageContaining("0.5 to Infinity");
+    ReductionOptions base = ReductionOptions.defaults();
+    List<ReductionOptions> changed =
+        List.of(
+            base.toBuilder().drainagePathRule(DrainagePathRule.MEAN_HEIGHT).build(),
+            base.toBuilder().methods(List.of(CvMethod.LOG_TIME)).build(),
+            base.toBuilder().waterUnitWeight(9800).build(),
+            base.toBuilder().preferredMethods(List.of(CvMethod.ROOT_TIME)).build(),
+            base.toBuilder().deformationBasis(DeformationBasis.END_OF_INCREMENT).build(),
+            base.toBuilder().disagreementFactor(3).build(),
+            base.toBuilder().usualPrimaryRatio(0.4, base.primaryRatioHigh()).build(),
+            base.toBuilder().usualPrimaryRatio(base.primaryRatioLow(), 0.99).build(),
+            base.toBuilder()
+                .fullCurveOptions(FullCurveOptions.defaults().withSecondaryOnset(1.5))
+                .build());
+    for (ReductionOptions o : changed) {
+      assertThat(o).as("%s", o).isNotEqualTo(base);
+      assertThat(o.toBuilder().build()).isEqualTo(o).hasSameHashCodeAs(o);
+    }
+  }
 }
