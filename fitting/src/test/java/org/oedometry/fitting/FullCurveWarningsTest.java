@@ -247,4 +247,20 @@ class FullCurveWarningsTest {
     assertThat(2 * exact.startsAtBest()).isGreaterThanOrEqualTo(exact.starts());
     assertThat(kinds(exact)).doesNotContain(FitWarning.Kind.STARTS_DISAGREE);
   }
+
+  @Test
+  @DisplayName(
+      "A straight line in log t read 20 times a cycle (the shape of secondary compression alone,"
+          + " FACTS.md log-time construction) has no primary part: the best fit runs to the fastest"
+          + " c_v searched and is refused as over before the first reading")
+  void straightLineInLogTimeIsRefused() {
+    double[] d = new double[DENSE.length];
+    for (int i = 0; i < d.length; i++) {
+      d[i] = 1e-4 * Math.log10(DENSE[i]);
+    }
+    assertThatThrownBy(() -> fit(DENSE, d))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("primary consolidation was over before the first reading")
+        .hasMessageContaining("fastest c_v searched");
+  }
 }
