@@ -258,6 +258,10 @@ class TestReductionTest {
     }
     assertThat(batch.get(0)).isEqualTo(batch.get(3));
     assertThat(batch.get(1)).isNotEqualTo(batch.get(2));
+    // Without options: the default options, as reduce(test) uses them.
+    List<TestReport> defaults = TestReduction.reduceAll(tests.subList(0, 2));
+    assertThat(defaults)
+        .containsExactly(TestReduction.reduce(tests.get(0)), TestReduction.reduce(tests.get(1)));
   }
 
   @Test
