@@ -65,6 +65,22 @@ class UnitsTest {
     double perPascal = Units.squareMetresPerKilonewtonToPerPascal(5.88e-4);
     assertThat(Units.perPascalToSquareMetresPerMeganewton(perPascal))
         .isCloseTo(0.588, within(1e-15));
+    // And back to m^2/kN (1 m^2/kN = 1e-3 m^2/N, the SI prefix).
+    assertThat(Units.perPascalToSquareMetresPerKilonewton(perPascal))
+        .isCloseTo(5.88e-4, within(1e-19));
+  }
+
+  @Test
+  @DisplayName(
+      "The reverse c_v conversions: 0.52596 m^2/yr is 1 mm^2/min and 3155.76 m^2/yr is 1 cm^2/s"
+          + " (FACTS.md, exact arithmetic with the Julian year)")
+  void coefficientOfConsolidationBackToLabUnits() {
+    double fromYear = Units.squareMetresPerYearToSquareMetresPerSecond(0.52596);
+    assertThat(Units.squareMetresPerSecondToSquareMillimetresPerMinute(fromYear))
+        .isCloseTo(1, within(1e-14));
+    double fromYearCm = Units.squareMetresPerYearToSquareMetresPerSecond(3155.76);
+    assertThat(Units.squareMetresPerSecondToSquareCentimetresPerSecond(fromYearCm))
+        .isCloseTo(1, within(1e-14));
   }
 
   @Test

@@ -184,4 +184,38 @@ class CompressionCurveTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("point index 1 is outside 0..0");
   }
+
+  @Test
+  @DisplayName(
+      "From a list of points: the same curve as from the two arrays; a null point is refused,"
+          + " naming its index")
+  void fromPointList() {
+    double[] stresses = {25e3, 50e3, 100e3};
+    double[] voidRatios = {0.98, 0.95, 0.87};
+    CompressionCurve fromArrays = CompressionCurve.of(1.0, 5e3, stresses, voidRatios);
+    CompressionCurve fromList =
+        CompressionCurve.of(
+            1.0,
+            5e3,
+            List.of(
+                new CompressionPoint(25e3, 0.98),
+                new CompressionPoint(50e3, 0.95),
+                new CompressionPoint(100e3, 0.87)));
+    assertThat(fromList.points()).isEqualTo(fromArrays.points());
+    assertThat(fromList).isEqualTo(fromArrays);
+    assertThatThrownBy(
+            () ->
+                CompressionCurve.of(
+                    1.0, 5e3, java.util.Arrays.asList(new CompressionPoint(25e3, 0.98), null)))
+        .isInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("point at index 1 must not be null");
+  }
+
+  @Test
+  @DisplayName("Every preconsolidation construction names its published source with a year")
+  void everyConstructionHasItsReference() {
+    for (PreconsolidationMethod m : PreconsolidationMethod.values()) {
+      assertThat(m.reference()).as("%s", m).matches(".*\\b(19|20)\\d\\d\\b.*");
+    }
+  }
 }
