@@ -248,7 +248,19 @@ public final class InflectionPointMethod {
     for (int i = 0; i < n; i++) {
       x[i] = Math.log10(readings.times[i]);
     }
-    double[] d = readings.movement;
+    // The movement scaled by a power of 2 (exact) so that its largest value is near 1: the local
+    // fits' sums of powers and squares stay within the double range for settlements of any
+    // magnitude, and every result scales back exactly (the same bits as without the scaling
+    // wherever that did not matter).
+    double largest = 0;
+    for (double value : readings.movement) {
+      largest = Math.max(largest, Math.abs(value));
+    }
+    int exponent = Math.getExponent(largest);
+    double[] d = new double[n];
+    for (int i = 0; i < n; i++) {
+      d[i] = Math.scalb(readings.movement[i], -exponent);
+    }
 
     double narrowest = options.windowHalfWidth();
     int wanted = options.minimumWindowReadings();
@@ -325,7 +337,8 @@ public final class InflectionPointMethod {
                   "the local window did not settle on the inflection in %d moves",
                   MAX_ITERATIONS)));
     }
-    double sign = readings.sign;
+    // The sign of the movement and the scale back to metres.
+    double sign = Math.scalb(readings.sign, exponent);
     List<PlotPoint> used = new ArrayList<>();
     for (int i = found.first; i <= found.last; i++) {
       used.add(new PlotPoint(x[i], sign * d[i]));
