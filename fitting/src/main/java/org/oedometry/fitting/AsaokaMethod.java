@@ -74,6 +74,10 @@ import org.oedometry.theory.Terzaghi;
  * left out, swelling (treated by its magnitude), readings resampled, readings that end before 90 %
  * consolidation, window not settled.
  *
+ * <p>Settlements of any magnitude give the same c<sub>v</sub>: the line is fitted to the pairs
+ * scaled by a power of 2 (exact), and the interpolation compares the signs of slopes rather than
+ * their product (tested from 10<sup>-300</sup> to 10<sup>300</sup> times the same curve).
+ *
  * <p>Deterministic and thread-safe. Results feed engineering decisions and must be reviewed by a
  * qualified engineer; local codes and standards govern.
  */

@@ -118,6 +118,10 @@ import org.oedometry.theory.Terzaghi;
  * Warnings: zero reading left out, swelling, readings that end before 90 % consolidation (T at the
  * last reading below 0.848 on this c<sub>v</sub>), window not settled, sparse readings.
  *
+ * <p>Settlements of any magnitude give the same c<sub>v</sub>: the readings are scaled by a power
+ * of 2 (exact) before the fits (tested from 10<sup>-300</sup> to 10<sup>300</sup> times the same
+ * curve).
+ *
  * <p>Deterministic and thread-safe. Results feed engineering decisions and must be reviewed by a
  * qualified engineer; local codes and standards govern.
  */
