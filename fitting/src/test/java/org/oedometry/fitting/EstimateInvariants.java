@@ -4,9 +4,11 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.quicktheories.QuickTheory.qt;
 import static org.quicktheories.generators.SourceDSL.doubles;
+import static org.quicktheories.generators.SourceDSL.integers;
 import static org.quicktheories.generators.SourceDSL.longs;
 
 import java.util.function.BiFunction;
+import java.util.function.ToDoubleFunction;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.theory.CurveParameters;
 
@@ -35,6 +37,33 @@ final class EstimateInvariants {
               double scaled =
                   fit.apply(ExactCurves.scaled(base, k, 1), ExactCurves.DRAINAGE_PATH).cv();
               assertThat(scaled * k).isCloseTo(cv, within(relativeTolerance * cv));
+            });
+  }
+
+  /**
+   * Settlements of any magnitude, scaled by 10<sup>k</sup> with k from -300 to 300: c<sub>v</sub>
+   * the same to 1e-9 and the given settlement of the result scaled by 10<sup>k</sup> to 1e-9 (U is
+   * a ratio of settlements; the fits once left the double range beyond about 1e&plusmn;150 m).
+   */
+  static <R extends CvEstimate> void anyMagnitude(
+      BiFunction<SettlementCurve, Double, R> fit,
+      SettlementCurve base,
+      ToDoubleFunction<R> settlement) {
+    R reference = fit.apply(base, ExactCurves.DRAINAGE_PATH);
+    double expected = settlement.applyAsDouble(reference);
+    qt().withFixedSeed(20261202L)
+        .withExamples(60)
+        .forAll(integers().between(-300, 300))
+        .checkAssert(
+            k -> {
+              double a = Math.pow(10, k);
+              R r = fit.apply(ExactCurves.scaled(base, 1, a), ExactCurves.DRAINAGE_PATH);
+              assertThat(r.cv())
+                  .as("10^%d", k)
+                  .isCloseTo(reference.cv(), within(1e-9 * reference.cv()));
+              assertThat(settlement.applyAsDouble(r) / a)
+                  .as("10^%d", k)
+                  .isCloseTo(expected, within(1e-9 * Math.abs(expected)));
             });
   }
 
