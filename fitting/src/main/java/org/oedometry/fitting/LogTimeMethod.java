@@ -28,7 +28,8 @@ import org.oedometry.fitting.internal.PreparedReadings;
  *       outside the range of its two neighbours by more than half that range, and by more than
  *       either neighbour, is replaced by interpolating them in log time (a single wild reading is
  *       removed; monotone readings are unchanged), and isotonic regression gives a non-decreasing
- *       copy. At least {@value #MINIMUM_READINGS} readings after loading are needed.
+ *       copy. At least {@value #MINIMUM_READINGS} readings after loading are needed (else {@link
+ *       IllegalArgumentException}, as for every method).
  *   <li><b>Interpolation.</b> The non-decreasing readings are interpolated by the shape-preserving
  *       monotone cubic of Fritsch and Carlson (1980) with Hyman's (1983) three-point knot
  *       derivatives, which never overshoots and reproduces straight stretches exactly: in x =
@@ -130,10 +131,11 @@ public final class LogTimeMethod {
    * @param curve one increment's readings, not null
    * @param drainagePathMetres drainage path H<sub>dr</sub>, m, finite, &gt; 0
    * @return c<sub>v</sub>, t50, d0, d50, d100, geometry and warnings
-   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0
+   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0, or fewer than
+   *     {@value #MINIMUM_READINGS} readings follow t = 0
    * @throws NullPointerException if the curve is null
-   * @throws FitException if the curve does not admit the construction (too few readings, no
-   *     inflection, secondary part not reached, first reading too late, d50 not reached)
+   * @throws FitException if the curve does not admit the construction (no inflection, secondary
+   *     part not reached, first reading too late, d50 not reached)
    */
   public static LogTimeResult fit(SettlementCurve curve, double drainagePathMetres) {
     return fit(curve, drainagePathMetres, LogTimeOptions.defaults());
@@ -146,7 +148,8 @@ public final class LogTimeMethod {
    * @param drainagePathMetres drainage path H<sub>dr</sub>, m, finite, &gt; 0
    * @param options the options, not null
    * @return c<sub>v</sub>, t50, d0, d50, d100, geometry and warnings
-   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0
+   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0, or fewer than
+   *     {@value #MINIMUM_READINGS} readings follow t = 0
    * @throws NullPointerException if the curve or the options are null
    * @throws FitException if the curve does not admit the construction
    */

@@ -90,10 +90,11 @@ public final class RootTimeMethod {
    * @param curve one increment's readings, not null
    * @param drainagePathMetres drainage path H<sub>dr</sub>, m, finite, &gt; 0
    * @return c<sub>v</sub>, t90, d0, d90, d100, geometry and warnings
-   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0
+   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0, or fewer than
+   *     {@value #MINIMUM_READINGS} readings follow t = 0
    * @throws NullPointerException if the curve is null
-   * @throws FitException if the curve does not admit the construction (too few readings, no linear
-   *     early part, no crossing before the last reading)
+   * @throws FitException if the curve does not admit the construction (no linear early part, no
+   *     crossing before the last reading)
    */
   public static RootTimeResult fit(SettlementCurve curve, double drainagePathMetres) {
     return fit(curve, drainagePathMetres, RootTimeOptions.defaults());
@@ -106,7 +107,8 @@ public final class RootTimeMethod {
    * @param drainagePathMetres drainage path H<sub>dr</sub>, m, finite, &gt; 0
    * @param options the options, not null
    * @return c<sub>v</sub>, t90, d0, d90, d100, geometry and warnings
-   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0
+   * @throws IllegalArgumentException if the drainage path is not finite and &gt; 0, or fewer than
+   *     {@value #MINIMUM_READINGS} readings follow t = 0
    * @throws NullPointerException if the curve or the options are null
    * @throws FitException if the curve does not admit the construction
    */

@@ -277,9 +277,12 @@ class LogTimeMethodTest {
         .isInstanceOf(NullPointerException.class);
     SettlementCurve few =
         SettlementCurve.of(new double[] {0, 60, 120, 240}, new double[] {0, 1e-5, 2e-5, 3e-5});
+    // ARCHITECTURE.md (Errors): too few readings is invalid input, an IllegalArgumentException
+    // (FitException's own description), as for the other six methods.
     assertThatThrownBy(() -> LogTimeMethod.fit(few, HDR))
-        .isInstanceOf(FitException.class)
-        .hasMessageContaining("at least 5 readings");
+        .isExactlyInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "3 readings after t = 0 are too few for the log-time method (needs at least 5)");
     SettlementCurve flat =
         SettlementCurve.of(
             new double[] {6, 15, 30, 60, 120, 240},

@@ -280,9 +280,12 @@ class RootTimeMethodTest {
         .isInstanceOf(NullPointerException.class);
     SettlementCurve few =
         SettlementCurve.of(new double[] {0, 1, 4, 9, 16}, new double[] {0, 1e-5, 2e-5, 3e-5, 4e-5});
+    // ARCHITECTURE.md (Errors): too few readings is invalid input, an IllegalArgumentException
+    // (FitException's own description), as for the other six methods.
     assertThatThrownBy(() -> RootTimeMethod.fit(few, HDR))
-        .isInstanceOf(FitException.class)
-        .hasMessageContaining("at least 5 readings");
+        .isExactlyInstanceOf(IllegalArgumentException.class)
+        .hasMessage(
+            "4 readings after t = 0 are too few for the root-time method (needs at least 5)");
   }
 
   @Test

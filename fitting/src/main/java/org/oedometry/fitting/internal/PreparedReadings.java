@@ -55,8 +55,9 @@ public final class PreparedReadings {
    * @param methodName the construction's name, for the message
    * @param plotAbscissa the plot coordinate of a time, e.g. log10 or sqrt; strictly increasing
    * @return the prepared readings
-   * @throws org.oedometry.fitting.FitException if fewer than minimumReadings readings remain after
-   *     the zero reading, or the settlement does not change
+   * @throws IllegalArgumentException if fewer than minimumReadings readings remain after the zero
+   *     reading (invalid input, as for every other method of the package)
+   * @throws org.oedometry.fitting.FitException if the settlement does not change
    */
   public static PreparedReadings of(
       double[] elapsedSeconds,
@@ -67,10 +68,10 @@ public final class PreparedReadings {
     int start = elapsedSeconds[0] == 0.0 ? 1 : 0;
     int n = elapsedSeconds.length - start;
     if (n < minimumReadings) {
-      throw new org.oedometry.fitting.FitException(
+      throw new IllegalArgumentException(
           Checks.format(
-              "the %s construction needs at least %d readings after loading (t > 0); %d given",
-              methodName, minimumReadings, n));
+              "%d readings after t = 0 are too few for the %s method (needs at least %d)",
+              n, methodName, minimumReadings));
     }
     double[] t = new double[n];
     double[] d = new double[n];

@@ -54,15 +54,18 @@ class PreparedReadingsTest {
   }
 
   @Test
-  @DisplayName("too few readings or no change: FitException with the reason")
+  @DisplayName(
+      "too few readings: IllegalArgumentException (invalid input); no change: FitException with"
+          + " the reason")
   void rejects() {
+    // ARCHITECTURE.md (Errors): invalid input is an IllegalArgumentException naming the value.
     assertThatThrownBy(
             () ->
                 PreparedReadings.of(
                     new double[] {0, 1, 2}, new double[] {0, 1, 2}, 3, "log-time", Math::log10))
-        .isInstanceOf(FitException.class)
+        .isExactlyInstanceOf(IllegalArgumentException.class)
         .hasMessage(
-            "the log-time construction needs at least 3 readings after loading (t > 0); 2 given");
+            "2 readings after t = 0 are too few for the log-time method (needs at least 3)");
     assertThatThrownBy(
             () ->
                 PreparedReadings.of(
