@@ -250,10 +250,12 @@ public final class AsaokaMethod {
       if (inside < MINIMUM_READINGS_IN_WINDOW) {
         throw new FitException(
             Checks.format(
-                "only %d readings lie between 60 %% and 95 %% consolidation (%.4g s to %.4g s):"
-                    + " resampling them at equal steps would invent the curve Asaoka's method"
-                    + " needs; it wants equally spaced or dense readings",
-                inside, sample.start(), sample.end()));
+                "only %s between 60 %% and 95 %% consolidation (%.4g s to %.4g s): resampling"
+                    + " them at equal steps would invent the curve Asaoka's method needs; it wants"
+                    + " equally spaced or dense readings",
+                Checks.count(inside, "reading lies", "readings lie"),
+                sample.start(),
+                sample.end()));
       }
     }
     double t80 = Terzaghi.timeFactor(COMPLETE_ENOUGH) / rate;
@@ -373,9 +375,11 @@ public final class AsaokaMethod {
     if (values.size() < 4) {
       throw new FitException(
           Checks.format(
-              "only %d equally spaced readings lie between %.4g s and %.4g s: Asaoka's line needs"
-                  + " at least 4",
-              values.size(), start, end));
+              "only %s between %.4g s and %.4g s: Asaoka's line needs at least 4",
+              Checks.count(
+                  values.size(), "equally spaced reading lies", "equally spaced readings lie"),
+              start,
+              end));
     }
     double[] out = values.stream().mapToDouble(Double::doubleValue).toArray();
     int last = first + (out.length - 1) * stride; // the last sampled reading

@@ -173,7 +173,10 @@ class AsaokaMethodTest {
         assertThatThrownBy(() -> AsaokaMethod.fit(c, H))
             .as("T %s, s %s", lastT, secondary)
             .isInstanceOf(FitException.class)
-            .hasMessageContaining("readings lie between 60 % and 95 % consolidation");
+            // English agreement: "1 reading lies", "2 readings lie" (never "1 readings").
+            .hasMessageMatching(
+                "only (1 reading lies|(0|[2-9]|[1-9]\\d+) readings lie) between 60 % and 95 %"
+                    + " consolidation.*");
       }
     }
   }

@@ -19,6 +19,18 @@ public final class Checks {
   }
 
   /**
+   * A count with its noun and verb in agreement, for messages: "1 reading lies", "3 readings lie".
+   *
+   * @param count the count
+   * @param one the words after a count of exactly 1, e.g. "reading lies"
+   * @param many the words after any other count, e.g. "readings lie"
+   * @return the count and the matching words
+   */
+  public static String count(int count, String one, String many) {
+    return count + " " + (count == 1 ? one : many);
+  }
+
+  /**
    * Checks a drainage path.
    *
    * @param drainagePathMetres H<sub>dr</sub>, m

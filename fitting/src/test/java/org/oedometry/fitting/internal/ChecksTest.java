@@ -18,4 +18,13 @@ class ChecksTest {
         .hasMessage("d0 (-Infinity m) must be finite");
     assertThat(Checks.format("%.2f", 1.5)).isEqualTo("1.50");
   }
+
+  @Test
+  void countsAgreeWithTheirNoun() {
+    // English agreement (from memory): singular after exactly one, plural after 0 and 2 or more.
+    assertThat(Checks.count(1, "reading lies", "readings lie")).isEqualTo("1 reading lies");
+    assertThat(Checks.count(0, "reading lies", "readings lie")).isEqualTo("0 readings lie");
+    assertThat(Checks.count(2, "reading lies", "readings lie")).isEqualTo("2 readings lie");
+    assertThat(Checks.count(11, "reading", "readings")).isEqualTo("11 readings");
+  }
 }
