@@ -43,7 +43,8 @@ final class IncrementReadings {
    * @param method the method's name for messages
    * @throws IllegalArgumentException if the curve is null, the drainage path is invalid or there
    *     are too few readings
-   * @throws FitException if the readings do not move
+   * @throws FitException if the readings do not move, or the last reading equals the first (no net
+   *     movement: +0 and -0 count as equal)
    */
   static IncrementReadings of(
       SettlementCurve curve, double drainagePathMetres, int minimum, String method) {
@@ -70,6 +71,15 @@ final class IncrementReadings {
           "the readings do not move (every settlement is "
               + d[0]
               + " m): there is no consolidation to analyse");
+    }
+    if (d[n - 1] == d[0]) {
+      // Movement in between but none from the first reading to the last: noise or a rebound,
+      // no consolidation (the log-time and root-time constructions refuse it alike).
+      throw new FitException(
+          Checks.format(
+              "the last reading (%s m) is where the first one was: no net movement, so there is no"
+                  + " consolidation to analyse",
+              d[n - 1]));
     }
     List<FitWarning> warnings = new ArrayList<>();
     if (first == 1) {
