@@ -83,6 +83,19 @@ public final class OedometerTestCsvReader {
           "sample",
           "depth");
 
+  /**
+   * Values that each pass every check of {@link Specimen} and together make a specimen (1 m high, 1
+   * m^2, G_s 2.65, saturated at a final water content of 0.5, so no dry mass is checked against the
+   * height): a group of values from the file put in their place is refused only for what the group
+   * itself holds.
+   */
+  private static final Map<String, Double> NEUTRAL_SPECIMEN =
+      Map.of(
+          "initial_height", 1.0,
+          "area", 1.0,
+          "specific_gravity", 2.65,
+          "final_water_content", 0.5);
+
   private OedometerTestCsvReader() {}
 
   /**
@@ -96,7 +109,13 @@ public final class OedometerTestCsvReader {
    *     NoSuchFileException} where it does not exist), with the JDK's exception as the cause where
    *     the JDK's own did not name the path
    * @throws TestDataException if a file is not UTF-8 text or does not describe a valid test; the
-   *     source named is the file's path
+   *     source named is the file's path. The message names the line of the row that holds the
+   *     offending value, with its column and value as written, also where the value passes the
+   *     reader's own checks and {@link Specimen}, {@link LoadIncrement}, {@link SettlementCurve} or
+   *     {@link OedometerTest} refuses it: that type's message is kept, followed by the lines of the
+   *     other rows its check involved, and its exception is the cause. A check over the whole test
+   *     (final height; height of solids from the final water content) names no single line but
+   *     lists the rows involved; a missing property names the file alone.
    */
   public static OedometerTest read(Path directory) throws IOException {
     if (Files.notExists(directory)) {
@@ -162,7 +181,9 @@ public final class OedometerTestCsvReader {
    *
    * @param tables the three texts
    * @return the test
-   * @throws TestDataException if the texts do not describe a valid test
+   * @throws TestDataException if the texts do not describe a valid test; the message names the
+   *     file, and the line, column and value of the offending row, as {@link #read(Path)} describes
+   *     (also for a value the value types refuse, their message kept and their exception the cause)
    * @throws NullPointerException if tables is null
    */
   public static OedometerTest parse(CsvTables tables) {
@@ -189,12 +210,17 @@ public final class OedometerTestCsvReader {
         readIncrements(
             CsvTable.parse(incrementsName, incrementsText, INCREMENT, INCREMENTS_HEADER));
     CsvTable readingsTable = CsvTable.parse(readingsName, readingsText, INCREMENT, READINGS_HEADER);
-    List<SettlementCurve> curves =
-        readCurves(readingsTable, increments, incrementsName, properties);
+    Readings readings = readCurves(readingsTable, increments, incrementsName, properties);
     List<LoadIncrement> loadIncrements = new ArrayList<>();
     for (int i = 0; i < increments.size(); i++) {
       IncrementRow row = increments.get(i);
-      loadIncrements.add(new LoadIncrement(row.before, row.after, curves.get(i)));
+      try {
+        loadIncrements.add(new LoadIncrement(row.before, row.after, readings.curves.get(i)));
+      } catch (IllegalArgumentException e) {
+        // Not reached: readIncrements checks the same stresses row by row; kept so that no
+        // refusal leaves the reader without its file and line.
+        throw new TestDataException(incrementsName, row.line, null, null, e.getMessage(), e);
+      }
     }
     try {
       return OedometerTest.builder(properties.specimen)
@@ -204,8 +230,109 @@ public final class OedometerTestCsvReader {
           .increments(loadIncrements)
           .build();
     } catch (IllegalArgumentException e) {
-      throw new TestDataException(readingsName, 0, null, null, e.getMessage(), e);
+      throw testError(e, properties, readings);
     }
+  }
+
+  /**
+   * The error for a test that {@link OedometerTest} refuses although every row passed: its checks
+   * of the heights are redone here, in its order and with its arithmetic on the values it was
+   * given, to find the row responsible (a reading), or the rows involved in a check over the whole
+   * test (the final height; the height of solids from the final water content). The stress
+   * continuity and the count of increments are checked row by row before (not reached here).
+   */
+  private static TestDataException testError(
+      IllegalArgumentException e, Properties properties, Readings readings) {
+    Specimen specimen = properties.specimen;
+    List<SettlementCurve> curves = readings.curves;
+    int n = curves.size();
+    double[] start = new double[n + 1];
+    start[0] = specimen.initialHeightMetres();
+    for (int i = 0; i < n; i++) {
+      SettlementCurve c = curves.get(i);
+      for (int j = 0; j < c.size(); j++) {
+        if (!Double.isFinite(start[i] - c.settlementMetres(j))) {
+          return readings.error(i, j, e);
+        }
+      }
+      start[i + 1] = start[i] - c.finalSettlementMetres();
+    }
+    double finalHeight = start[n];
+    if (!(finalHeight > 0)) {
+      return new TestDataException(
+          readings.source,
+          0,
+          null,
+          null,
+          e.getMessage()
+              + " (rows involved: the last reading of each increment, "
+              + lines(readings.lastRows())
+              + ", and "
+              + rowList(properties, List.of("initial_height"), properties.source)
+              + ")",
+          e);
+    }
+    boolean fromWaterContent = specimen.solidsBasis() == Specimen.SolidsBasis.FINAL_WATER_CONTENT;
+    double heightOfSolids =
+        fromWaterContent
+            ? finalHeight / (1 + specimen.finalVoidRatioFromWaterContent().getAsDouble())
+            : specimen.heightOfSolidsFromDryMass().getAsDouble();
+    if (fromWaterContent
+        && (!(start[0] > heightOfSolids) || !Double.isFinite(start[0] / heightOfSolids))) {
+      return new TestDataException(
+          properties.source,
+          0,
+          null,
+          null,
+          e.getMessage()
+              + " (rows involved: "
+              + rowList(
+                  properties,
+                  List.of("initial_height", "specific_gravity", "final_water_content"),
+                  null)
+              + ", and the last reading of each increment at "
+              + readings.source
+              + " "
+              + lines(readings.lastRows())
+              + ")",
+          e);
+    }
+    for (int i = 0; i < n; i++) {
+      SettlementCurve c = curves.get(i);
+      for (int j = 0; j < c.size(); j++) {
+        double h = start[i] - c.settlementMetres(j);
+        if (!(h > heightOfSolids) || !Double.isFinite(h / heightOfSolids)) {
+          return readings.error(i, j, e);
+        }
+      }
+    }
+    return new TestDataException(readings.source, 0, null, null, e.getMessage(), e);
+  }
+
+  /** "line 4" or "lines 4, 7, 10". */
+  private static String lines(List<Row> rows) {
+    List<String> numbers = new ArrayList<>();
+    for (Row row : rows) {
+      numbers.add(Long.toString(row.line()));
+    }
+    return (rows.size() == 1 ? "line " : "lines ") + String.join(", ", numbers);
+  }
+
+  /**
+   * The properties given among some base names, each as its name in the file and its line: {@code
+   * initial_height_mm at line 5}, or {@code initial_height_mm at properties.csv line 5} when the
+   * file is named (the message is about another file).
+   */
+  private static String rowList(Properties properties, List<String> bases, String file) {
+    List<String> parts = new ArrayList<>();
+    for (String base : bases) {
+      Row row = properties.rows.get(base);
+      if (row != null) {
+        parts.add(
+            row.cells().get(0) + " at " + (file == null ? "" : file + " ") + "line " + row.line());
+      }
+    }
+    return String.join(", ", parts);
   }
 
   // ---------------------------------------------------------------- properties
@@ -213,6 +340,10 @@ public final class OedometerTestCsvReader {
   /** What the properties file gives. */
   private static final class Properties {
     String source;
+
+    /** The row of each property given, by base name ({@code initial_height}). */
+    Map<String, Row> rows;
+
     Specimen specimen;
     Drainage drainage = Drainage.DOUBLE;
     DrainagePathRule rule = DrainagePathRule.HEIGHT_AT_HALF_CONSOLIDATION;
@@ -276,33 +407,13 @@ public final class OedometerTestCsvReader {
     }
     Properties p = new Properties();
     p.source = table.source();
-    Specimen.Builder b = Specimen.builder();
+    p.rows = seen;
     requireProperty(table, seen, "initial_height");
     requireProperty(table, seen, "specific_gravity");
-    b.initialHeight(numbers.get("initial_height"));
-    b.specificGravity(numbers.get("specific_gravity"));
-    if (numbers.containsKey("diameter")) {
-      b.diameter(numbers.get("diameter"));
-    }
-    if (numbers.containsKey("area")) {
-      b.area(numbers.get("area"));
-    }
-    if (numbers.containsKey("dry_mass")) {
-      b.dryMass(numbers.get("dry_mass"));
-    }
-    if (numbers.containsKey("final_water_content")) {
-      b.finalWaterContent(numbers.get("final_water_content"));
-    }
-    if (numbers.containsKey("initial_water_content")) {
-      b.initialWaterContent(numbers.get("initial_water_content"));
-    }
-    if (numbers.containsKey("bulk_density")) {
-      b.bulkDensity(numbers.get("bulk_density"));
-    }
     try {
-      p.specimen = b.build();
+      p.specimen = specimenBuilder(numbers).build();
     } catch (IllegalArgumentException e) {
-      throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+      throw specimenError(table, p, numbers, e);
     }
     if (text.containsKey("drainage")) {
       p.drainage = choice(table, seen.get("drainage"), "drainage", Drainage.class);
@@ -330,9 +441,105 @@ public final class OedometerTestCsvReader {
               text.getOrDefault("sample", ""),
               text.getOrDefault("depth", ""));
     } catch (IllegalArgumentException e) {
-      throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+      // Not reached: every label passed Checks.plainText above, the only check of the labels.
+      throw new TestDataException(
+          table.source(),
+          0,
+          null,
+          null,
+          e.getMessage()
+              + " (rows involved: "
+              + rowList(p, List.of("project", "borehole", "sample", "depth"), null)
+              + ")",
+          e);
     }
     return p;
+  }
+
+  /** A specimen builder holding the given values (SI, by base name); other names are skipped. */
+  private static Specimen.Builder specimenBuilder(Map<String, Double> values) {
+    Specimen.Builder b = Specimen.builder();
+    values.forEach(
+        (base, value) -> {
+          switch (base) {
+            case "initial_height" -> b.initialHeight(value);
+            case "diameter" -> b.diameter(value);
+            case "area" -> b.area(value);
+            case "specific_gravity" -> b.specificGravity(value);
+            case "dry_mass" -> b.dryMass(value);
+            case "final_water_content" -> b.finalWaterContent(value);
+            case "initial_water_content" -> b.initialWaterContent(value);
+            case "bulk_density" -> b.bulkDensity(value);
+            default -> {
+              // gauge_zero: not a property of the specimen
+            }
+          }
+        });
+    return b;
+  }
+
+  /**
+   * The error for a specimen that {@link Specimen} refuses although every property passed the
+   * reader's checks. Specimen's checks each concern one value or one group of values; in its order
+   * each group given in the file is tried alone, with {@link #NEUTRAL_SPECIMEN} for the rest, and
+   * the first refused names its row (with the other rows of the group). A specimen missing a
+   * diameter and an area, or a dry mass and a final water content, has no row to name: the file
+   * alone is named.
+   */
+  private static TestDataException specimenError(
+      CsvTable table, Properties p, Map<String, Double> numbers, IllegalArgumentException e) {
+    if (numbers.containsKey("diameter") && numbers.containsKey("area")) {
+      Row diameter = p.rows.get("diameter");
+      Row area = p.rows.get("area");
+      boolean areaLater = area.line() > diameter.line();
+      return rowError(
+          table, p, areaLater ? List.of("area", "diameter") : List.of("diameter", "area"), e);
+    }
+    String shape = numbers.containsKey("diameter") ? "diameter" : "area";
+    List<List<String>> groups =
+        List.of(
+            List.of("initial_height"),
+            List.of(shape),
+            List.of("specific_gravity"),
+            List.of("final_water_content"),
+            List.of("dry_mass", "initial_height", shape, "specific_gravity"),
+            List.of("initial_water_content"),
+            List.of("bulk_density"),
+            List.of("bulk_density", "initial_water_content", "specific_gravity"));
+    for (List<String> group : groups) {
+      if (!numbers.keySet().containsAll(group)) {
+        continue;
+      }
+      Map<String, Double> values = new HashMap<>(NEUTRAL_SPECIMEN);
+      if (group.contains("diameter")) {
+        values.remove("area");
+      }
+      for (String base : group) {
+        values.put(base, numbers.get(base));
+      }
+      try {
+        specimenBuilder(values).build();
+      } catch (IllegalArgumentException refused) {
+        return rowError(table, p, group, e);
+      }
+    }
+    return new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+  }
+
+  /**
+   * An error at the row of the first property of a group, the others listed with their lines, the
+   * value type's message kept and its exception the cause.
+   */
+  private static TestDataException rowError(
+      CsvTable table, Properties p, List<String> group, IllegalArgumentException e) {
+    Row row = p.rows.get(group.get(0));
+    String others = rowList(p, group.subList(1, group.size()), null);
+    return table.error(
+        row,
+        row.cells().get(0),
+        row.cells().get(1),
+        others.isEmpty() ? e.getMessage() : e.getMessage() + " (with " + others + ")",
+        e);
   }
 
   private static String baseOf(String key) {
@@ -516,7 +723,41 @@ public final class OedometerTestCsvReader {
 
   // ---------------------------------------------------------------- readings
 
-  private static List<SettlementCurve> readCurves(
+  /**
+   * The curves read, with the rows they came from: for messages about a value that the value types
+   * refuse after reading.
+   *
+   * @param source the readings file
+   * @param column the header of the third column (settlement or gauge)
+   * @param curves one curve per increment
+   * @param rows the rows of each increment's readings, in order
+   */
+  private record Readings(
+      String source, String column, List<SettlementCurve> curves, List<List<Row>> rows) {
+
+    /** An error at the row of reading j of increment i. */
+    TestDataException error(int i, int j, IllegalArgumentException cause) {
+      Row row = rows.get(i).get(j);
+      return new TestDataException(
+          source,
+          row.line(),
+          column,
+          CsvTable.shorten(row.cells().get(2)),
+          cause.getMessage(),
+          cause);
+    }
+
+    /** The last row of each increment. */
+    List<Row> lastRows() {
+      List<Row> last = new ArrayList<>();
+      for (List<Row> increment : rows) {
+        last.add(increment.get(increment.size() - 1));
+      }
+      return last;
+    }
+  }
+
+  private static Readings readCurves(
       CsvTable table, List<IncrementRow> increments, String incrementsName, Properties properties) {
     List<String> header = table.header().cells();
     long line = table.header().line();
@@ -698,9 +939,23 @@ public final class OedometerTestCsvReader {
       try {
         curves.add(SettlementCurve.of(times.get(i), settlement));
       } catch (IllegalArgumentException e) {
-        throw new TestDataException(table.source(), 0, null, null, e.getMessage(), e);
+        // Not reached: every reading was checked above as SettlementCurve checks it.
+        throw new TestDataException(
+            table.source(),
+            0,
+            null,
+            null,
+            e.getMessage()
+                + " (rows involved: the readings of increment "
+                + (i + 1)
+                + ", lines "
+                + rows.get(0).line()
+                + " to "
+                + rows.get(rows.size() - 1).line()
+                + ")",
+            e);
       }
     }
-    return curves;
+    return new Readings(table.source(), valueName, curves, rowsPerIncrement);
   }
 }

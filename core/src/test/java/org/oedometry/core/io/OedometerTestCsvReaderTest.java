@@ -280,7 +280,8 @@ class OedometerTestCsvReaderTest {
             "properties.csv line 7, column specific_gravity, value '7.1': must be > 1.0 and <="
                 + " 6.0");
     assertBad(PROPERTIES.replace("dry_mass_g,120.0", "dry_mass_g,500"), INCREMENTS, READINGS)
-        .hasMessageStartingWith("properties.csv: height of solids (0.0419");
+        .hasMessageStartingWith(
+            "properties.csv line 8, column dry_mass_g, value '500': height of solids (0.0419");
     assertBad(PROPERTIES.replace("diameter_mm,75.0\n", ""), INCREMENTS, READINGS)
         .hasMessage("properties.csv: the specimen needs a diameter or an area");
     assertBad(PROPERTIES.replace("initial_height_mm,20.0\n", ""), INCREMENTS, READINGS)
@@ -370,7 +371,9 @@ class OedometerTestCsvReaderTest {
     assertBad(PROPERTIES, INCREMENTS, READINGS.replace("1,1,0.2", "1,-1,0.2"))
         .hasMessageContaining("value '-1': elapsed time must be >= 0");
     assertBad(PROPERTIES, INCREMENTS, READINGS.replace("1,1440,0.5", "1,1440,12"))
-        .hasMessageStartingWith("readings.csv: specimen height at reading 2");
+        .hasMessageStartingWith(
+            "readings.csv line 4, column settlement_mm, value '12': specimen height at reading"
+                + " 2");
   }
 
   @Test

@@ -260,8 +260,23 @@ public final class CsvTable {
    * @return the exception, to throw
    */
   public TestDataException error(Row row, String column, String cell, String problem) {
+    return error(row, column, cell, problem, null);
+  }
+
+  /**
+   * An error about one cell, revealed by another exception (a value type refusing the value).
+   *
+   * @param row the row
+   * @param column the column header
+   * @param cell the cell text
+   * @param problem what is wrong
+   * @param cause the exception that revealed the problem, or null
+   * @return the exception, to throw
+   */
+  public TestDataException error(
+      Row row, String column, String cell, String problem, Throwable cause) {
     return new TestDataException(
-        source, row.line(), column, cell == null ? null : shorten(cell), problem, null);
+        source, row.line(), column, cell == null ? null : shorten(cell), problem, cause);
   }
 
   /**
