@@ -76,4 +76,15 @@ final class Checks {
     double sum = a + b;
     return Double.isFinite(sum) ? 0.5 * sum : 0.5 * a + 0.5 * b;
   }
+
+  /**
+   * A stress given by its log<sub>10</sub>, for a message: the stress in pascals where 10 to that
+   * power is a positive finite double, else "10^x" (never "Infinity" or a false 0).
+   */
+  static String stressText(double log10Stress) {
+    double stress = Math.pow(10, log10Stress);
+    return stress > 0 && Double.isFinite(stress)
+        ? String.valueOf(stress)
+        : String.format(Locale.ROOT, "10^%s", log10Stress);
+  }
 }

@@ -158,7 +158,7 @@ public final class PachecoSilvaMethod {
               "the virgin line reaches the initial void ratio %s at %s Pa, outside the loaded"
                   + " range %s..%s Pa where the curve is known",
               e0,
-              Math.pow(10, xa),
+              Checks.stressText(xa),
               env.stress[0],
               env.stress[n - 1]),
           AXES,

@@ -211,4 +211,26 @@ class PachecoSilvaMethodTest {
           .isCloseTo(exact.doubleValue(), within(1e-12 * Math.abs(exact.doubleValue())));
     }
   }
+
+  @Test
+  @DisplayName(
+      "A virgin line falling by a few ulp reaches e0 only at 10^(1e13) Pa: the reason quotes the"
+          + " power of ten, not Infinity (found by the whole-reduction fuzz)")
+  void farIntersectionQuotedAsPowerOfTen() {
+    // ARCHITECTURE.md: no NaN or infinity in any result or message. Invented points: e0 = 0.80,
+    // the loading points at 0.81 falling by one ulp (2^-53 * 2^0 ~ 1.1e-16) per doubling.
+    double[] stresses = {10e3, 20e3, 40e3, 80e3, 160e3};
+    double[] e = new double[stresses.length];
+    e[0] = 0.81;
+    for (int i = 1; i < e.length; i++) {
+      e[i] = Math.nextDown(e[i - 1]);
+    }
+    PreconsolidationEstimate est =
+        PachecoSilvaMethod.estimate(CompressionCurve.of(0.80, stresses, e));
+    assertThat(est.preconsolidationPressure()).isEmpty();
+    assertThat(est.absenceReason())
+        .contains("reaches the initial void ratio 0.8 at 10^")
+        .doesNotContain("Infinity")
+        .doesNotContain("NaN");
+  }
 }
