@@ -59,6 +59,11 @@ import org.oedometry.fitting.internal.Checks;
  * by its magnitude), fewer than 3 early readings before 50 % (the 60 % window used), fewer than 4
  * readings on the line, choice not settled.
  *
+ * <p>Settlements of any magnitude give the same c<sub>v</sub>: the movement is scaled by a power of
+ * 2 (exact) before the fits, the hyperbola's d<sub>100</sub> included, and every settlement is
+ * scaled back exactly (tested from 10<sup>-300</sup> to 10<sup>300</sup> times the same curve, with
+ * either d<sub>100</sub>; ordinary curves give the same bits as without the scaling).
+ *
  * <p>Deterministic and thread-safe. Results feed engineering decisions and must be reviewed by a
  * qualified engineer; local codes and standards govern.
  */
@@ -107,21 +112,44 @@ public final class EarlySlopeMethod {
    */
   public static EarlySlopeResult fit(
       SettlementCurve curve, double drainagePathMetres, EarlySlopeOptions options) {
+    return fit(curve, drainagePathMetres, options, true);
+  }
+
+  /**
+   * Applies the method, on the movement scaled by a power of 2 (as the public method) or, for the
+   * tests' comparison with the arithmetic before the scaling, unscaled.
+   *
+   * @param scaled whether the movement is scaled ({@link IncrementReadings#movementExponent})
+   */
+  static EarlySlopeResult fit(
+      SettlementCurve curve, double drainagePathMetres, EarlySlopeOptions options, boolean scaled) {
     if (options == null) {
       throw new IllegalArgumentException("options must not be null");
     }
     IncrementReadings readings =
         IncrementReadings.of(curve, drainagePathMetres, MINIMUM_READINGS, "early-slope");
     double[] t = readings.times;
-    double[] d = readings.movement;
+    // The movement scaled by a power of 2 (exact) so that its largest value is near 1: the
+    // hyperbola's t/d and the lines' sums stay within the double range for settlements of any
+    // magnitude, and every settlement scales back exactly.
+    RectangularHyperbolaMethod.Scale scale =
+        scaled
+            ? RectangularHyperbolaMethod.Scale.of(readings)
+            : RectangularHyperbolaMethod.Scale.NONE;
+    int exponent = scale.movement();
+    double[] d = readings.scaledMovement(exponent);
     int n = t.length;
     List<FitWarning> warnings = new ArrayList<>(readings.warnings);
     double d100;
     double startZero = 0;
     if (options.primaryEnd() == EarlySlopeOptions.PrimaryEnd.RECTANGULAR_HYPERBOLA) {
-      RectangularHyperbolaResult hyperbola;
+      RectangularHyperbolaMethod.ScaledFit hyperbola;
+      // On the same scaled movement; its warnings quote the corrected zero in the input's sign,
+      // as this method's d0.
       try {
-        hyperbola = RectangularHyperbolaMethod.fit(SettlementCurve.of(t, d), drainagePathMetres);
+        hyperbola =
+            RectangularHyperbolaMethod.fitScaled(
+                readings, scale, drainagePathMetres, RectangularHyperbolaOptions.defaults());
       } catch (FitException e) {
         throw new FitException(
             "the early-slope method takes d100 from the rectangular hyperbola, which failed: "
@@ -168,7 +196,8 @@ public final class EarlySlopeMethod {
           Checks.format(
               "the primary compression d100 - d0 (%s m) is not positive: d100 (%s m) lies below the"
                   + " early line's zero",
-              primary, d100));
+              IncrementReadings.metresText(primary, exponent, "%s"),
+              IncrementReadings.metresText(d100, exponent, "%s")));
     }
     double ratio = slope / primary;
     double cv = Math.PI / 4 * drainagePathMetres * drainagePathMetres * ratio * ratio;
@@ -176,13 +205,20 @@ public final class EarlySlopeMethod {
     if (!(cv > 0) || !Double.isFinite(cv) || !(t50 > 0) || !Double.isFinite(t50)) {
       throw new FitException("the early slope gives no finite positive c_v");
     }
-    int count = 0;
+    // The sign of the movement and the scale back to metres (exact, a power of 2).
     double sign = readings.sign;
+    double metresSlope =
+        IncrementReadings.inMetres(sign * slope, exponent, "the early slope", "m/s^0.5");
+    double metresD0 = IncrementReadings.inMetres(sign * d0, exponent, "d0", "m");
+    double metresD100 = IncrementReadings.inMetres(sign * d100, exponent, "d100", "m");
+    double metresPrimary =
+        IncrementReadings.inMetres(sign * primary, exponent, "the primary compression", "m");
+    int count = 0;
     List<PlotPoint> used = new ArrayList<>();
     for (int i = 0; i < n; i++) {
       if (chosen[i]) {
         count++;
-        used.add(new PlotPoint(root[i], sign * d[i]));
+        used.add(new PlotPoint(root[i], sign * readings.movement[i]));
       }
     }
     if (count < 4) {
@@ -192,13 +228,13 @@ public final class EarlySlopeMethod {
               Checks.format("the early line rests on %d readings", count)));
     }
     List<PlotPoint> drawn =
-        List.of(new PlotPoint(0, sign * d0), new PlotPoint(primary / slope, sign * d100));
+        List.of(new PlotPoint(0, metresD0), new PlotPoint(primary / slope, metresD100));
     return new EarlySlopeResult(
         cv,
-        sign * slope,
-        sign * d0,
-        sign * d100,
-        sign * primary,
+        metresSlope,
+        metresD0,
+        metresD100,
+        metresPrimary,
         t50,
         options.primaryEnd(),
         used,

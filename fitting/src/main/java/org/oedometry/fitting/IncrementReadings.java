@@ -114,4 +114,96 @@ final class IncrementReadings {
   double lastTime() {
     return times[times.length - 1];
   }
+
+  /**
+   * The binary exponent of the largest |movement| ({@link Math#getExponent}): dividing the movement
+   * by 2 to this power brings its largest value into [1, 2) (or near it, for subnormal readings),
+   * so that a method's sums and quotients stay within the double range for settlements of any
+   * magnitude.
+   *
+   * @return the exponent, -1023 to 1023
+   */
+  int movementExponent() {
+    double largest = 0;
+    for (double value : movement) {
+      largest = Math.max(largest, Math.abs(value));
+    }
+    return Math.getExponent(largest);
+  }
+
+  /**
+   * The movement times 2<sup>-exponent</sup>, a new array: exact (a power of 2) wherever the result
+   * is a normal double, as it is for the exponent of {@link #movementExponent}, so that results
+   * computed on it and multiplied by 2<sup>exponent</sup> are those of the movement itself.
+   *
+   * @param exponent the power of 2 to divide by; 0 gives a copy
+   * @return the scaled movement
+   */
+  double[] scaledMovement(int exponent) {
+    double[] scaled = new double[movement.length];
+    for (int i = 0; i < scaled.length; i++) {
+      scaled[i] = Math.scalb(movement[i], -exponent);
+    }
+    return scaled;
+  }
+
+  /**
+   * A settlement computed on the movement scaled by 2<sup>-exponent</sup>, back in metres for a
+   * message: formatted with the given template where it is a finite double in metres, else in
+   * decimal notation beyond the double range ({@link #decimal}; no infinity in messages).
+   *
+   * @param scaled the scaled value
+   * @param exponent the power of 2 the movement was divided by
+   * @param template a {@link String#format} template for one double, as {@code "%s"}
+   * @return the text, without the unit
+   */
+  static String metresText(double scaled, int exponent, String template) {
+    double value = Math.scalb(scaled, exponent);
+    return Double.isFinite(value) ? Checks.format(template, value) : decimal(scaled, exponent);
+  }
+
+  /**
+   * A value given as scaled times 2<sup>exponent</sup>, in decimal notation to 4 digits even where
+   * it lies beyond the double range, as "1.462e+375" (from log<sub>10</sub> of the two factors).
+   *
+   * @param scaled a finite value
+   * @param exponent its power of 2
+   * @return the text
+   */
+  static String decimal(double scaled, int exponent) {
+    if (scaled == 0) {
+      return "0";
+    }
+    double log = Math.log10(Math.abs(scaled)) + exponent * Math.log10(2);
+    double power = Math.floor(log);
+    double mantissa = Math.copySign(Math.pow(10, log - power), scaled);
+    if (Math.abs(mantissa) >= 9.9995) {
+      mantissa /= 10;
+      power += 1;
+    }
+    return Checks.format("%.4fe%+d", mantissa, (long) power).replaceFirst("\\.?0+e", "e");
+  }
+
+  /**
+   * A settlement (or a slope in metres per unit of time) computed on the movement scaled by
+   * 2<sup>-exponent</sup>, back in metres: exact (a power of 2) wherever the result is a normal
+   * double.
+   *
+   * @param scaled the scaled value
+   * @param exponent the power of 2 the movement was divided by
+   * @param what the quantity's name for the message
+   * @param unit its unit for the message, as "m"
+   * @return the value in metres
+   * @throws FitException if the value in metres is beyond the double range
+   */
+  static double inMetres(double scaled, int exponent, String what, String unit) {
+    double value = Math.scalb(scaled, exponent);
+    if (!Double.isFinite(value)) {
+      throw new FitException(
+          Checks.format(
+              "%s (%s %s) is beyond the range of double precision",
+              what, decimal(scaled, exponent), unit));
+    }
+    return value;
+  }
 }

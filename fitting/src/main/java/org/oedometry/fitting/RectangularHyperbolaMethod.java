@@ -103,6 +103,12 @@ import org.oedometry.theory.Terzaghi;
  * resampled, few early readings for d<sub>0</sub>, readings that end before t<sub>90</sub>, choice
  * or zero not settled.
  *
+ * <p>Settlements of any magnitude give the same c<sub>v</sub>: the movement is scaled by a power of
+ * 2 (exact) before the fits, and each line's times likewise, with every result scaled back exactly
+ * (tested from 10<sup>-300</sup> to 10<sup>300</sup> times the same curve; ordinary curves give the
+ * same bits as without the scaling). The line and its points are reported in s/m, so the
+ * FitException above remains where they themselves lie beyond the double range.
+ *
  * <p>Deterministic and thread-safe. Results feed engineering decisions and must be reviewed by a
  * qualified engineer; local codes and standards govern.
  */
@@ -199,39 +205,154 @@ public final class RectangularHyperbolaMethod {
    */
   public static RectangularHyperbolaResult fit(
       SettlementCurve curve, double drainagePathMetres, RectangularHyperbolaOptions options) {
+    return fit(curve, drainagePathMetres, options, true);
+  }
+
+  /**
+   * Applies the method, on the movement scaled by a power of 2 (as the public method) or, for the
+   * tests' comparison with the arithmetic before the scaling, unscaled.
+   *
+   * @param scaled whether the movement is scaled ({@link IncrementReadings#movementExponent})
+   */
+  static RectangularHyperbolaResult fit(
+      SettlementCurve curve,
+      double drainagePathMetres,
+      RectangularHyperbolaOptions options,
+      boolean scaled) {
     if (options == null) {
       throw new IllegalArgumentException("options must not be null");
     }
     IncrementReadings readings =
         IncrementReadings.of(curve, drainagePathMetres, MINIMUM_READINGS, "rectangular hyperbola");
+    Scale scale = scaled ? Scale.of(readings) : Scale.NONE;
+    int exponent = scale.movement();
+    ScaledFit f = fitScaled(readings, scale, drainagePathMetres, options);
+    List<FitWarning> warnings = new ArrayList<>(readings.warnings);
+    warnings.addAll(f.warnings);
+    // Back to metres (d0, d100) and to s/m and 1/m (the line and its points): exact, a power of 2,
+    // so the same bits as a fit on the movement itself wherever that stays within the range.
+    double sign = readings.sign;
+    double d0 = IncrementReadings.inMetres(sign * f.d0, exponent, "d0", "m");
+    double d100 = IncrementReadings.inMetres(sign * f.d100, exponent, "d100", "m");
+    double slope = perMetre(f.slope, exponent, "the slope of t/d against t", "1/m");
+    double intercept = perMetre(f.intercept, exponent, "the intercept of t/d", "s/m");
+    List<PlotPoint> used = new ArrayList<>();
+    for (PlotPoint p : f.line.used) {
+      used.add(new PlotPoint(p.x(), perMetre(p.y(), exponent, "t/d on the line", "s/m")));
+    }
+    List<PlotPoint> fitted =
+        List.of(
+            new PlotPoint(
+                f.t60, perMetre(f.slope * f.t60 + f.intercept, exponent, "t/d at t60", "s/m")),
+            new PlotPoint(
+                f.t90, perMetre(f.slope * f.t90 + f.intercept, exponent, "t/d at t90", "s/m")));
+    return new RectangularHyperbolaResult(
+        f.cv,
+        slope,
+        intercept,
+        f.t60,
+        f.t90,
+        d0,
+        d100,
+        options.zero(),
+        f.line.resampled,
+        used,
+        fitted,
+        f.line.iterations,
+        drainagePathMetres,
+        warnings);
+  }
+
+  /**
+   * The powers of 2 (exact) of the method's arithmetic: the movement is divided by
+   * 2<sup>movement</sup>, and where {@code times}, a line's times by the power of 2 that brings
+   * their largest into [1, 2) (its slope scaled back), so that t/d and the lines' sums stay within
+   * the double range for settlements of any magnitude (and the sums of squares of the times for
+   * times of any magnitude).
+   *
+   * @param movement the exponent the movement is divided by
+   * @param times whether the lines' times are scaled
+   */
+  record Scale(int movement, boolean times) {
+
+    /** No scaling: the arithmetic on the readings as they are. */
+    static final Scale NONE = new Scale(0, false);
+
+    /** The scaling of the methods: the movement's largest value brought near 1, times scaled. */
+    static Scale of(IncrementReadings readings) {
+      return new Scale(readings.movementExponent(), true);
+    }
+
+    /** The exponent by which a line's times are divided: that of the largest, or 0. */
+    int timeExponent(double[] x) {
+      if (!times) {
+        return 0;
+      }
+      double largest = 0;
+      for (double value : x) {
+        largest = Math.max(largest, Math.abs(value));
+      }
+      return Math.getExponent(largest);
+    }
+  }
+
+  /**
+   * The method on the movement divided by 2<sup>e</sup> (e = {@link Scale#movement}): settlements
+   * (d0, d100) in those units, the line's slope and intercept and the points' t/d times
+   * 2<sup>e</sup>, c_v and times as they are; the warnings of the method itself (not those of the
+   * readings).
+   */
+  record ScaledFit(
+      double cv,
+      double slope,
+      double intercept,
+      double t60,
+      double t90,
+      double d0,
+      double d100,
+      Hyperbola line,
+      List<FitWarning> warnings) {}
+
+  /**
+   * The method on the readings' movement divided by 2<sup>e</sup> (exact; e = {@link
+   * Scale#movement}), every settlement quoted in a message back in metres. Shared with {@link
+   * EarlySlopeMethod}, which takes d0 and d100 from it.
+   *
+   * @throws FitException if the curve admits no hyperbola (see the class description)
+   */
+  static ScaledFit fitScaled(
+      IncrementReadings readings,
+      Scale scale,
+      double drainagePathMetres,
+      RectangularHyperbolaOptions options) {
     double[] t = readings.times;
-    double[] d = readings.movement;
+    double[] d = readings.scaledMovement(scale.movement());
     int n = t.length;
     boolean resample = options.resampleSparseReadings();
-    List<FitWarning> warnings = new ArrayList<>(readings.warnings);
+    List<FitWarning> warnings = new ArrayList<>();
     double d0 = 0;
     Hyperbola line;
     if (options.zero() == RectangularHyperbolaOptions.Zero.START_OF_INCREMENT) {
-      line = hyperbola(t, d, d0, resample);
+      line = hyperbola(t, d, d0, resample, scale);
     } else {
       double[] root = new double[n];
-      double scale = 0;
+      double largest = 0;
       for (int i = 0; i < n; i++) {
         root[i] = Math.sqrt(t[i]);
-        scale = Math.max(scale, Math.abs(d[i]));
+        largest = Math.max(largest, Math.abs(d[i]));
       }
       // The first early line takes the first timed reading as the zero and the last as d100, so
       // that a large deformation on loading (which the zero reading carries and the published form
       // would count as consolidation) does not stop the iteration before it starts.
       EarlySlopeMethod.EarlyLine early = earlyLine(root, d, d[n - 1], d[0]);
       d0 = early.d0;
-      line = hyperbola(t, d, d0, resample);
+      line = hyperbola(t, d, d0, resample, scale);
       boolean settled = false;
       for (int k = 0; k < MAX_ITERATIONS && !settled; k++) {
         early = earlyLine(root, d, d0 + line.primary(), d0);
-        settled = Math.abs(early.d0 - d0) <= ZERO_SETTLED * scale;
+        settled = Math.abs(early.d0 - d0) <= ZERO_SETTLED * largest;
         d0 = early.d0;
-        line = hyperbola(t, d, d0, resample);
+        line = hyperbola(t, d, d0, resample, scale);
       }
       if (early.widened) {
         warnings.add(
@@ -248,7 +369,8 @@ public final class RectangularHyperbolaMethod {
                 FitWarning.Kind.READING_CHOICE_NOT_SETTLED,
                 Checks.format(
                     "the corrected zero (%s m) did not settle in %d steps",
-                    readings.sign * d0, MAX_ITERATIONS)));
+                    IncrementReadings.metresText(readings.sign * d0, scale.movement(), "%s"),
+                    MAX_ITERATIONS)));
       }
     }
     double intercept = line.intercept;
@@ -314,30 +436,11 @@ public final class RectangularHyperbolaMethod {
                   "the choice of readings between t60 and t90 did not settle in %d steps",
                   MAX_ITERATIONS)));
     }
-    double sign = readings.sign;
-    List<PlotPoint> fitted =
-        List.of(
-            new PlotPoint(t60, slope * t60 + intercept),
-            new PlotPoint(t90, slope * t90 + intercept));
-    return new RectangularHyperbolaResult(
-        cv,
-        slope,
-        intercept,
-        t60,
-        t90,
-        sign * d0,
-        sign * d100,
-        options.zero(),
-        line.resampled,
-        line.used,
-        fitted,
-        line.iterations,
-        drainagePathMetres,
-        warnings);
+    return new ScaledFit(cv, slope, intercept, t60, t90, d0, d100, line, warnings);
   }
 
   /** A line t/&delta; = m t + c (&delta; = d - d<sub>0</sub>) and how it was found. */
-  private record Hyperbola(
+  record Hyperbola(
       double intercept,
       double slope,
       boolean settled,
@@ -371,7 +474,8 @@ public final class RectangularHyperbolaMethod {
    * The line for a given zero: from the readings between t60 and t90 (iterated), or, when fewer
    * than 2 readings lie there and resampling is allowed, from interpolated settlements.
    */
-  private static Hyperbola hyperbola(double[] t, double[] d, double d0, boolean resample) {
+  private static Hyperbola hyperbola(
+      double[] t, double[] d, double d0, boolean resample, Scale scale) {
     int n = t.length;
     double last = d[n - 1] - d0;
     if (!(last > 0)) {
@@ -379,7 +483,8 @@ public final class RectangularHyperbolaMethod {
           Checks.format(
               "the last reading (%s m) does not lie beyond the corrected zero (%s m): no"
                   + " consolidation to analyse",
-              d[n - 1], d0));
+              IncrementReadings.metresText(d[n - 1], scale.movement(), "%s"),
+              IncrementReadings.metresText(d0, scale.movement(), "%s")));
     }
     // The chosen readings, by index in time order: first by the degree of movement, then (the
     // times being increasing) the index range between t60 and t90, found by binary search.
@@ -395,18 +500,19 @@ public final class RectangularHyperbolaMethod {
     for (int k = 0; k < MAX_ITERATIONS; k++) {
       if (chosen.length < 2) {
         if (resample) {
-          return resampled(t, d, d0, iterations);
+          return resampled(t, d, d0, iterations, scale);
         }
-        throw tooFew(t, d);
+        throw tooFew(t, d, scale);
       }
       iterations++;
-      double[] line = fitLine(t, d, d0, chosen);
+      double[] line = fitLine(t, d, d0, chosen, scale);
       double ratio = (HYPERBOLA_SLOPE / HYPERBOLA_INTERCEPT) * line[0] / line[1];
       double t60 = Terzaghi.timeFactor(LOWER_DEGREE) * ratio;
       double t90 = Terzaghi.timeFactor(UPPER_DEGREE) * ratio;
       int[] next = IntStream.range(firstAtOrAfter(t, t60), firstAfter(t, t90)).toArray();
       if (Arrays.equals(next, chosen)) {
-        return new Hyperbola(line[0], line[1], true, iterations, false, used(t, d, d0, chosen));
+        return new Hyperbola(
+            line[0], line[1], true, iterations, false, used(t, d, d0, chosen, scale));
       }
       choices.add(chosen);
       lines.add(line);
@@ -429,19 +535,24 @@ public final class RectangularHyperbolaMethod {
         if (highest / lowest - 1 < CYCLE_TOLERANCE) {
           double[] keptLine = lines.get(kept);
           return new Hyperbola(
-              keptLine[0], keptLine[1], true, iterations, false, used(t, d, d0, choices.get(kept)));
+              keptLine[0],
+              keptLine[1],
+              true,
+              iterations,
+              false,
+              used(t, d, d0, choices.get(kept), scale));
         }
       }
       chosen = next;
     }
     if (chosen.length < 2) {
       if (resample) {
-        return resampled(t, d, d0, iterations);
+        return resampled(t, d, d0, iterations, scale);
       }
-      throw tooFew(t, d);
+      throw tooFew(t, d, scale);
     }
-    double[] line = fitLine(t, d, d0, chosen);
-    return new Hyperbola(line[0], line[1], false, iterations, false, used(t, d, d0, chosen));
+    double[] line = fitLine(t, d, d0, chosen, scale);
+    return new Hyperbola(line[0], line[1], false, iterations, false, used(t, d, d0, chosen, scale));
   }
 
   /**
@@ -451,7 +562,7 @@ public final class RectangularHyperbolaMethod {
    * interpolated Terzaghi curve gives c<sub>v</sub> exactly. Iterated from the time at which the
    * interpolant reaches 75 % of the movement until the time scale settles.
    */
-  private static Hyperbola resampled(double[] t, double[] d, double d0, int previous) {
+  private static Hyperbola resampled(double[] t, double[] d, double d0, int previous, Scale scale) {
     int n = t.length;
     double[] logT = new double[n];
     for (int i = 0; i < n; i++) {
@@ -484,7 +595,7 @@ public final class RectangularHyperbolaMethod {
                   "the interpolated settlement at %.4g s has not moved from the corrected zero",
                   time));
         }
-        double ordinate = timeOverMovement(time, delta);
+        double ordinate = timeOverMovement(time, delta, scale);
         points.add(new double[] {time, ordinate, NODE_WEIGHTS[j]});
         used.add(new PlotPoint(time, ordinate));
       }
@@ -495,7 +606,7 @@ public final class RectangularHyperbolaMethod {
                     + " %.4g s)",
                 NODE_TIME_FACTORS[0] * ratio, t[0], t[n - 1]));
       }
-      line = weightedLine(points);
+      line = weightedLine(points, scale);
       double next = (HYPERBOLA_SLOPE / HYPERBOLA_INTERCEPT) * line[0] / line[1];
       settled = Math.abs(next - ratio) <= 1e-12 * ratio;
       ratio = next;
@@ -519,26 +630,41 @@ public final class RectangularHyperbolaMethod {
     return new Hyperbola(line[0], line[1], settled, iterations, true, used);
   }
 
-  /** {c, m} of a weighted least-squares line through {x, y, w} points (centred sums). */
-  private static double[] weightedLine(List<double[]> points) {
+  /**
+   * {c, m} of a weighted least-squares line through {x, y, w} points (centred sums), the times x
+   * divided by a power of 2 ({@link Scale#timeExponent}) and the slope scaled back: exact, so the
+   * same line wherever the sums stay within the double range without it.
+   */
+  private static double[] weightedLine(List<double[]> points, Scale scale) {
+    double[] x = new double[points.size()];
+    for (int k = 0; k < x.length; k++) {
+      x[k] = points.get(k)[0];
+    }
+    int timeExponent = scale.timeExponent(x);
+    for (int k = 0; k < x.length; k++) {
+      x[k] = Math.scalb(x[k], -timeExponent);
+    }
     double sw = 0;
     double mx = 0;
     double my = 0;
-    for (double[] p : points) {
+    for (int k = 0; k < x.length; k++) {
+      double[] p = points.get(k);
       sw += p[2];
-      mx += p[2] * p[0];
+      mx += p[2] * x[k];
       my += p[2] * p[1];
     }
     mx /= sw;
     my /= sw;
     double sxx = 0;
     double sxy = 0;
-    for (double[] p : points) {
-      sxx += p[2] * (p[0] - mx) * (p[0] - mx);
-      sxy += p[2] * (p[0] - mx) * (p[1] - my);
+    for (int k = 0; k < x.length; k++) {
+      double[] p = points.get(k);
+      sxx += p[2] * (x[k] - mx) * (x[k] - mx);
+      sxy += p[2] * (x[k] - mx) * (p[1] - my);
     }
-    double slope = sxy / sxx;
-    double intercept = my - slope * mx;
+    double scaledSlope = sxy / sxx;
+    double intercept = my - scaledSlope * mx;
+    double slope = Math.scalb(scaledSlope, -timeExponent);
     if (!(sxx > 0) || !(slope > 0) || !(intercept > 0) || !Double.isFinite(slope + intercept)) {
       throw new FitException(
           "t/d against t has no positive slope and intercept over the interpolated settlements:"
@@ -548,21 +674,39 @@ public final class RectangularHyperbolaMethod {
   }
 
   /**
-   * t/&delta; of one point of the line, s/m, for &delta; &gt; 0; a FitException where the quotient
-   * overflows or underflows the normal doubles (times and settlements of very different
-   * magnitudes), since the line's slope and intercept could not be reported then either.
+   * t/&delta; of one point of the line, for &delta; &gt; 0 on the movement divided by 2<sup>e</sup>
+   * (e = {@link Scale#movement}; so t/&delta; times 2<sup>e</sup>, s/m); a FitException where the
+   * quotient overflows or underflows the normal doubles (times and settlements of very different
+   * magnitudes), since the line could not be fitted then.
    */
-  private static double timeOverMovement(double time, double delta) {
+  private static double timeOverMovement(double time, double delta, Scale scale) {
     double ratio = time / delta;
     if (!(ratio >= Double.MIN_NORMAL) || ratio == Double.POSITIVE_INFINITY) {
       throw new FitException(
           Checks.format(
-              "t/d at %.4g s (%.4g m from the zero) is beyond the range of double precision: the"
+              "t/d at %.4g s (%s m from the zero) is beyond the range of double precision: the"
                   + " times and settlements are too far apart in magnitude for the rectangular"
                   + " hyperbola",
-              time, delta));
+              time, IncrementReadings.metresText(delta, scale.movement(), "%.4g")));
     }
     return ratio;
+  }
+
+  /**
+   * A value per metre (t/&delta; in s/m, the slope in 1/m) computed on the movement scaled by
+   * 2<sup>-exponent</sup>, back in its own units (exact); a FitException where it leaves the normal
+   * doubles, as t/&delta; itself would (times and settlements of very different magnitudes).
+   */
+  private static double perMetre(double scaled, int exponent, String what, String unit) {
+    double value = Math.scalb(scaled, -exponent);
+    if (!(value >= Double.MIN_NORMAL) || value == Double.POSITIVE_INFINITY) {
+      throw new FitException(
+          Checks.format(
+              "%s (%s %s) is beyond the range of double precision: the times and settlements are"
+                  + " too far apart in magnitude for the rectangular hyperbola",
+              what, IncrementReadings.decimal(scaled, -exponent), unit));
+    }
+    return value;
   }
 
   /** Position of the first choice equal to the given one, or -1. */
@@ -605,25 +749,27 @@ public final class RectangularHyperbolaMethod {
     return low;
   }
 
-  private static FitException tooFew(double[] t, double[] d) {
+  private static FitException tooFew(double[] t, double[] d, Scale scale) {
     return new FitException(
         Checks.format(
             "fewer than 2 readings lie between 60 %% and 90 %% consolidation (last reading at"
                 + " %.4g s, %s m): the curve may end before 60 %% or the readings are too sparse"
                 + " for the rectangular hyperbola",
-            t[t.length - 1], d[d.length - 1]));
+            t[t.length - 1],
+            IncrementReadings.metresText(d[d.length - 1], scale.movement(), "%s")));
   }
 
-  private static List<PlotPoint> used(double[] t, double[] d, double d0, int[] chosen) {
+  private static List<PlotPoint> used(
+      double[] t, double[] d, double d0, int[] chosen, Scale scale) {
     List<PlotPoint> used = new ArrayList<>();
     for (int i : chosen) {
-      used.add(new PlotPoint(t[i], timeOverMovement(t[i], d[i] - d0)));
+      used.add(new PlotPoint(t[i], timeOverMovement(t[i], d[i] - d0, scale)));
     }
     return used;
   }
 
   /** {c, m} of t/(d - d0) = m t + c over the chosen readings. */
-  private static double[] fitLine(double[] t, double[] d, double d0, int[] chosen) {
+  private static double[] fitLine(double[] t, double[] d, double d0, int[] chosen, Scale scale) {
     int count = chosen.length;
     double[] x = new double[count];
     double[] y = new double[count];
@@ -634,13 +780,24 @@ public final class RectangularHyperbolaMethod {
             Checks.format(
                 "the reading at %.4g s (%s m) in the 60-90 %% range has not moved from the zero"
                     + " (%s m)",
-                t[i], d[i], d0));
+                t[i],
+                IncrementReadings.metresText(d[i], scale.movement(), "%s"),
+                IncrementReadings.metresText(d0, scale.movement(), "%s")));
       }
       x[k] = t[i];
-      y[k] = timeOverMovement(t[i], d[i] - d0);
+      y[k] = timeOverMovement(t[i], d[i] - d0, scale);
+    }
+    // The times divided by a power of 2 (exact) and the slope scaled back: the same line wherever
+    // the sums of squares of the times stay within the double range without it.
+    int timeExponent = scale.timeExponent(x);
+    for (int k = 0; k < count; k++) {
+      x[k] = Math.scalb(x[k], -timeExponent);
     }
     double[] line = SmallFits.line(x, y);
-    if (line == null || !(line[1] > 0) || !(line[0] > 0)) {
+    if (line != null) {
+      line[1] = Math.scalb(line[1], -timeExponent);
+    }
+    if (line == null || !(line[1] > 0) || !(line[0] > 0) || !Double.isFinite(line[1])) {
       throw new FitException(
           "t/d against t has no positive slope and intercept over the chosen readings: the curve"
               + " is not a rectangular hyperbola there");

@@ -7,9 +7,12 @@ import static org.quicktheories.generators.SourceDSL.doubles;
 import static org.quicktheories.generators.SourceDSL.integers;
 import static org.quicktheories.generators.SourceDSL.longs;
 
+import java.util.SplittableRandom;
 import java.util.function.BiFunction;
+import java.util.function.Supplier;
 import java.util.function.ToDoubleFunction;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.synthetic.ReadingSchedules;
 import org.oedometry.theory.CurveParameters;
 
 /**
@@ -65,6 +68,81 @@ final class EstimateInvariants {
                   .as("10^%d", k)
                   .isCloseTo(expected, within(1e-9 * Math.abs(expected)));
             });
+  }
+
+  /**
+   * A seeded ordinary curve: an exact curve of our forward model (c_v 0.1 to 100 m^2/yr, d_p 10 um
+   * to 10 mm, d_i up to 20 % and a secondary slope up to 3 % of d_p a cycle) with Gaussian noise up
+   * to 1 % of d_p, on the usual lab schedule, 5 to 80 readings a cycle or a reading every 10 s for
+   * a day; one in three with a zero reading, one in three swelling (negated).
+   */
+  static SettlementCurve ordinaryCurve(long seed) {
+    SplittableRandom random = new SplittableRandom(seed);
+    double cv = Math.pow(10, random.nextDouble(-1, 2)) / ExactCurves.YEAR;
+    double primary = Math.pow(10, random.nextDouble(-5, -2));
+    CurveParameters truth =
+        CurveParameters.of(
+            random.nextDouble(0, 0.2) * primary, primary, cv, random.nextDouble(0, 0.03) * primary);
+    double[] times =
+        switch (random.nextInt(3)) {
+          case 0 -> ReadingSchedules.usualLab();
+          case 1 -> ReadingSchedules.logSpaced(6, 86_400, 5 + random.nextInt(76));
+          default -> ExactCurves.equalTimes(10, 8640);
+        };
+    SettlementCurve exact = ExactCurves.curve(times, truth);
+    SettlementCurve c =
+        ExactCurves.noisy(exact, random.nextDouble(0, 0.01) * primary, random.nextLong());
+    if (random.nextInt(3) == 0) {
+      double[] t = ReadingSchedules.withZeroReading(c.elapsedSeconds());
+      double[] d = new double[t.length];
+      System.arraycopy(c.settlementMetres(), 0, d, 1, c.size());
+      c = SettlementCurve.of(t, d);
+    }
+    return random.nextInt(3) == 0 ? ExactCurves.negated(c) : c;
+  }
+
+  /**
+   * The power-of-2 scaling changes no bit on ordinary curves ({@link #ordinaryCurve}, 200 seeds).
+   * Two checks: (1) the fit with the scaling equals, in every component (records compare doubles by
+   * their bits), the fit without it (exponent 0: the method's arithmetic as it was before the
+   * scaling), or both throw a FitException with the same message; (2) the readings times 2^k (k
+   * from -60 to 60) give the same c_v bit for bit and the settlement times 2^k exactly. Source:
+   * IEEE 754 operations are correctly rounded, so multiplying every operand by a power of 2 (exact
+   * while no value leaves the normal range) multiplies a homogeneous result by it exactly.
+   */
+  static <R extends CvEstimate> void sameBitsAsUnscaled(
+      BiFunction<SettlementCurve, Double, R> fit,
+      BiFunction<SettlementCurve, Double, R> unscaledFit,
+      ToDoubleFunction<R> settlement) {
+    qt().withFixedSeed(20261203L)
+        .withExamples(200)
+        .forAll(longs().all(), integers().between(-60, 60))
+        .checkAssert(
+            (seed, k) -> {
+              SettlementCurve c = ordinaryCurve(seed);
+              Object scaled = outcome(() -> fit.apply(c, ExactCurves.DRAINAGE_PATH));
+              Object unscaled = outcome(() -> unscaledFit.apply(c, ExactCurves.DRAINAGE_PATH));
+              assertThat(scaled).isEqualTo(unscaled);
+              if (scaled instanceof CvEstimate) {
+                @SuppressWarnings("unchecked")
+                R r = (R) scaled;
+                R b =
+                    fit.apply(
+                        ExactCurves.scaled(c, 1, Math.scalb(1.0, k)), ExactCurves.DRAINAGE_PATH);
+                assertThat(b.cv()).isEqualTo(r.cv());
+                assertThat(settlement.applyAsDouble(b))
+                    .isEqualTo(Math.scalb(settlement.applyAsDouble(r), k));
+              }
+            });
+  }
+
+  /** The result, or the message of the FitException thrown. */
+  private static Object outcome(Supplier<? extends CvEstimate> fit) {
+    try {
+      return fit.get();
+    } catch (FitException e) {
+      return "FitException: " + e.getMessage();
+    }
   }
 
   /** Settlement scaled by a: c_v unchanged (U is a ratio of settlements). */

@@ -3,6 +3,8 @@ package org.oedometry.fitting;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.synthetic.ReadingSchedules;
+import org.oedometry.theory.CurveParameters;
 
 class RectangularHyperbolaMethodProperties {
 
@@ -26,5 +28,54 @@ class RectangularHyperbolaMethodProperties {
           + " FitException, never another exception (ARCHITECTURE.md, errors)")
   void noisyCurvesGiveResultOrFitException() {
     EstimateInvariants.noisyCurvesGiveResultOrFitException(RectangularHyperbolaMethod::fit);
+  }
+
+  @Test
+  @DisplayName(
+      "Settlements of any magnitude (scaled by 10^k, k from -300 to 300; exact dense curve, and"
+          + " the usual lab schedule that is resampled; both zeros): c_v the same to 1e-9 and d100"
+          + " scaled by 10^k, since U is a ratio of settlements (t/d and its line's sums once left"
+          + " the double range for settlements near 1e-300 m or 1e300 m)")
+  void settlementsOfAnyMagnitude() {
+    // Source: Terzaghi's theory, U = (d - d0) / (d100 - d0) is a ratio of settlements, so c_v
+    // does not depend on their unit and d100 scales with them (the same curve in other units).
+    double cv = 2 / ExactCurves.YEAR;
+    SettlementCurve[] bases = {
+      BASE,
+      ExactCurves.dense(cv, 0.02e-3),
+      ExactCurves.curve(ReadingSchedules.usualLab(), CurveParameters.of(0.02e-3, 0.5e-3, cv, 5e-6))
+    };
+    RectangularHyperbolaOptions published =
+        RectangularHyperbolaOptions.defaults()
+            .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT);
+    for (SettlementCurve base : bases) {
+      EstimateInvariants.anyMagnitude(
+          RectangularHyperbolaMethod::fit, base, RectangularHyperbolaResult::d100);
+      EstimateInvariants.anyMagnitude(
+          (c, h) -> RectangularHyperbolaMethod.fit(c, h, published),
+          base,
+          RectangularHyperbolaResult::d100);
+    }
+  }
+
+  @Test
+  @DisplayName(
+      "The scaling by a power of 2 changes no bit on 200 seeded ordinary curves (IEEE 754: exact"
+          + " scaling commutes with correctly rounded operations): the same result as without it,"
+          + " for both zeros and without resampling, and readings times 2^k give c_v bit for bit"
+          + " and d100 times 2^k exactly")
+  void scalingChangesNoBitOnOrdinaryCurves() {
+    for (RectangularHyperbolaOptions options :
+        new RectangularHyperbolaOptions[] {
+          RectangularHyperbolaOptions.defaults(),
+          RectangularHyperbolaOptions.defaults()
+              .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT),
+          RectangularHyperbolaOptions.defaults().withResampleSparseReadings(false)
+        }) {
+      EstimateInvariants.sameBitsAsUnscaled(
+          (c, h) -> RectangularHyperbolaMethod.fit(c, h, options),
+          (c, h) -> RectangularHyperbolaMethod.fit(c, h, options, false),
+          RectangularHyperbolaResult::d100);
+    }
   }
 }

@@ -280,6 +280,31 @@ class RectangularHyperbolaMethodTest {
 
   @Test
   @DisplayName(
+      "Settlements near 1e-300 m (an exact curve of our forward model read once a log cycle, T ="
+          + " 0.001 to 5, so one reading between 60 and 90 %, scaled by 1e-300): the FitException"
+          + " quotes the last reading in metres as read (Double.toString of the input), not the"
+          + " settlement scaled for the fit")
+  void messagesQuoteMetresAtAnyMagnitude() {
+    double cv = 2 / ExactCurves.YEAR;
+    SettlementCurve c =
+        ExactCurves.scaled(
+            ExactCurves.curve(
+                ExactCurves.logTimes(cv, 1e-3, 5, 1), CurveParameters.of(0, 0.5e-3, cv, 0)),
+            1,
+            1e-300);
+    double last = c.settlementMetres()[c.size() - 1];
+    RectangularHyperbolaOptions published =
+        RectangularHyperbolaOptions.defaults()
+            .withZero(RectangularHyperbolaOptions.Zero.START_OF_INCREMENT)
+            .withResampleSparseReadings(false);
+    assertThatThrownBy(() -> RectangularHyperbolaMethod.fit(c, H, published))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("fewer than 2 readings")
+        .hasMessageContaining(last + " m");
+  }
+
+  @Test
+  @DisplayName(
       "The 60-90 % readings by binary search: the same indices as scanning every reading, for 2,000"
           + " random increasing times and limits (including limits equal to a reading, outside the"
           + " readings, and NaN)")
@@ -353,5 +378,40 @@ class RectangularHyperbolaMethodTest {
     RectangularHyperbolaResult r =
         RectangularHyperbolaMethod.fit(c.readings().toCurve(), c.increment().drainagePath());
     assertThat(r.hasWarning(FitWarning.Kind.READING_CHOICE_NOT_SETTLED)).isTrue();
+  }
+
+  @Test
+  @DisplayName(
+      "On a swelling curve the early-slope method passes on the hyperbola's warnings word for word"
+          + " (the same case negated; its corrected zero is quoted in the input's sign)")
+  void earlySlopeQuotesTheHyperbolaWarnings() {
+    org.oedometry.fitting.synthetic.SyntheticStudy.Case c =
+        org.oedometry.fitting.synthetic.SyntheticStudy.draw(
+            org.oedometry.fitting.synthetic.SyntheticStudy.Family.PURE_TERZAGHI,
+            org.oedometry.fitting.synthetic.SyntheticStudy.Schedule.DATA_LOGGER,
+            -8637382971442436956L);
+    SettlementCurve swelling = Curves.transform(c.readings().toCurve(), 1, -1, 0);
+    double h = c.increment().drainagePath();
+    // ARCHITECTURE.md (Values): settlement positive for compression, so a swelling curve's values
+    // are quoted negative, as the reported d0 is; both methods must say the same.
+    java.util.List<String> hyperbola =
+        messages(RectangularHyperbolaMethod.fit(swelling, h).warnings());
+    java.util.List<String> early =
+        messages(
+            EarlySlopeMethod.fit(
+                    swelling,
+                    h,
+                    EarlySlopeOptions.defaults()
+                        .withPrimaryEnd(EarlySlopeOptions.PrimaryEnd.RECTANGULAR_HYPERBOLA))
+                .warnings());
+    assertThat(hyperbola).anyMatch(m -> m.contains("did not settle"));
+    assertThat(early).containsAll(hyperbola);
+  }
+
+  private static java.util.List<String> messages(java.util.List<FitWarning> warnings) {
+    return warnings.stream()
+        .filter(w -> !w.is(FitWarning.Kind.FEW_EARLY_READINGS))
+        .map(FitWarning::message)
+        .toList();
   }
 }
