@@ -204,6 +204,9 @@ public final class LogTimeMethod {
     LocalFitter fitter = new LocalFitter(x, y, curve);
     int lo = 0;
     int hi = 0;
+    boolean[] dense = new boolean[centres];
+    int[] windowFrom = new int[centres];
+    int[] windowTo = new int[centres];
     for (int k = 0; k < centres; k++) {
       double c = x[0] + k * step;
       while (lo < n && x[lo] < c - WINDOW_HALF_WIDTH) {
@@ -212,8 +215,9 @@ public final class LogTimeMethod {
       while (hi < n && x[hi] <= c + WINDOW_HALF_WIDTH) {
         hi++;
       }
-      slope[k] = fitter.slope(c, lo, hi);
+      fitter.window(c, lo, hi, k, dense, windowFrom, windowTo);
     }
+    fitter.slopes(dense, windowFrom, windowTo, slope);
     int best = 0;
     for (int k = 1; k < centres; k++) {
       if (slope[k] > slope[best]) {
@@ -502,7 +506,7 @@ public final class LogTimeMethod {
    * Local straight-line fits on the readings, or on the interpolant sampled once on a uniform grid
    * (spacing a tenth of the window half width, so a full window holds 21 samples).
    */
-  private static final class LocalFitter {
+  static final class LocalFitter {
     private final double[] x;
     private final double[] y;
     private final double[] gridX;
@@ -526,33 +530,68 @@ public final class LogTimeMethod {
       gridY = new double[count];
       int interval = 0;
       int last = x.length - 2;
-      for (int k = 0; k < count; k++) {
+      int k = 0;
+      while (k < count) {
+        // The grid points in one interval of the interpolant (its polynomial evaluated in a loop
+        // of its own, free of the search for the interval).
+        int first = k;
         double at = Math.min(low + k * gridStep, high);
         while (interval < last && x[interval + 1] <= at) {
           interval++;
         }
-        gridX[k] = at;
-        gridY[k] = curve.valueInInterval(interval, at);
+        double end = interval < last ? x[interval + 1] : Double.POSITIVE_INFINITY;
+        do {
+          gridX[k] = at;
+          k++;
+          at = k < count ? Math.min(low + k * gridStep, high) : Double.POSITIVE_INFINITY;
+        } while (k < count && at < end);
+        curve.valuesInInterval(interval, gridX, first, k, gridY);
       }
     }
 
-    /** Slope of the local line only (two passes, no residuals): the grid loop's hot path. */
-    double slope(double centre, int lo, int hi) {
-      double[] px;
-      double[] py;
-      int from;
-      int to;
+    /**
+     * The window of centre k: the readings lo..hi where they are dense enough, else the points of
+     * the sampled interpolant within the window (stored as dense[k], from[k], to[k]).
+     */
+    void window(double centre, int lo, int hi, int k, boolean[] dense, int[] from, int[] to) {
       if (hi - lo >= DENSE_WINDOW_READINGS) {
-        px = x;
-        py = y;
-        from = lo;
-        to = hi;
+        dense[k] = true;
+        from[k] = lo;
+        to[k] = hi;
       } else {
-        px = gridX;
-        py = gridY;
-        from = gridFrom(centre);
-        to = gridTo(centre, from);
+        from[k] = gridFrom(centre);
+        to[k] = gridTo(centre, from[k]);
       }
+    }
+
+    /**
+     * Slopes of the local lines only (two passes, no residuals): the grid loop's hot path. Runs of
+     * four neighbouring centres whose windows have the same source and length are computed in one
+     * loop, each with its own sums in the same order as alone (the same bits): their four chains of
+     * additions then overlap instead of waiting on each other.
+     */
+    void slopes(boolean[] dense, int[] from, int[] to, double[] out) {
+      int k = 0;
+      int count = out.length;
+      while (k < count) {
+        int length = to[k] - from[k];
+        if (k + 3 < count
+            && dense[k + 1] == dense[k]
+            && dense[k + 2] == dense[k]
+            && dense[k + 3] == dense[k]
+            && to[k + 1] - from[k + 1] == length
+            && to[k + 2] - from[k + 2] == length
+            && to[k + 3] - from[k + 3] == length) {
+          slopesOfFour(dense[k] ? x : gridX, dense[k] ? y : gridY, from, k, length, out);
+          k += 4;
+        } else {
+          out[k] = slope(dense[k] ? x : gridX, dense[k] ? y : gridY, from[k], to[k]);
+          k++;
+        }
+      }
+    }
+
+    private static double slope(double[] px, double[] py, int from, int to) {
       double mx = 0;
       double my = 0;
       for (int i = from; i < to; i++) {
@@ -569,6 +608,67 @@ public final class LogTimeMethod {
         sxy += dx * (py[i] - my);
       }
       return sxx > 0 ? sxy / sxx : 0.0;
+    }
+
+    /** {@link #slope} of centres k to k + 3, windows of the same length, sums interleaved. */
+    private static void slopesOfFour(
+        double[] px, double[] py, int[] from, int k, int length, double[] out) {
+      int a = from[k];
+      int b = from[k + 1];
+      int c = from[k + 2];
+      int d = from[k + 3];
+      double mxa = 0;
+      double mya = 0;
+      double mxb = 0;
+      double myb = 0;
+      double mxc = 0;
+      double myc = 0;
+      double mxd = 0;
+      double myd = 0;
+      for (int i = 0; i < length; i++) {
+        mxa += px[a + i];
+        mya += py[a + i];
+        mxb += px[b + i];
+        myb += py[b + i];
+        mxc += px[c + i];
+        myc += py[c + i];
+        mxd += px[d + i];
+        myd += py[d + i];
+      }
+      mxa /= length;
+      mya /= length;
+      mxb /= length;
+      myb /= length;
+      mxc /= length;
+      myc /= length;
+      mxd /= length;
+      myd /= length;
+      double sxxa = 0;
+      double sxya = 0;
+      double sxxb = 0;
+      double sxyb = 0;
+      double sxxc = 0;
+      double sxyc = 0;
+      double sxxd = 0;
+      double sxyd = 0;
+      for (int i = 0; i < length; i++) {
+        double dxa = px[a + i] - mxa;
+        sxxa += dxa * dxa;
+        sxya += dxa * (py[a + i] - mya);
+        double dxb = px[b + i] - mxb;
+        sxxb += dxb * dxb;
+        sxyb += dxb * (py[b + i] - myb);
+        double dxc = px[c + i] - mxc;
+        sxxc += dxc * dxc;
+        sxyc += dxc * (py[c + i] - myc);
+        double dxd = px[d + i] - mxd;
+        sxxd += dxd * dxd;
+        sxyd += dxd * (py[d + i] - myd);
+      }
+      out[k] = sxxa > 0 ? sxya / sxxa : 0.0;
+      out[k + 1] = sxxb > 0 ? sxyb / sxxb : 0.0;
+      out[k + 2] = sxxc > 0 ? sxyc / sxxc : 0.0;
+      out[k + 3] = sxxd > 0 ? sxyd / sxxd : 0.0;
     }
 
     private int gridFrom(double centre) {

@@ -167,6 +167,34 @@ public final class MonotoneCubic {
   }
 
   /**
+   * {@link #valueInInterval} at several abscissae of one interval, the same bits as one by one.
+   *
+   * @param i the interval, 0 &le; i &lt; n - 1
+   * @param at the abscissae, read from index from to to - 1
+   * @param from first index
+   * @param to index after the last
+   * @param out the values, written at the same indices
+   */
+  public void valuesInInterval(int i, double[] at, int from, int to, double[] out) {
+    double x0 = x[i];
+    double h = x[i + 1] - x0;
+    double y0 = y[i];
+    double y1 = y[i + 1];
+    double m0 = slope[i];
+    double m1 = slope[i + 1];
+    for (int k = from; k < to; k++) {
+      double s = (at[k] - x0) / h;
+      double s2 = s * s;
+      double s3 = s2 * s;
+      double h00 = 2 * s3 - 3 * s2 + 1;
+      double h10 = s3 - 2 * s2 + s;
+      double h01 = -2 * s3 + 3 * s2;
+      double h11 = s3 - s2;
+      out[k] = h00 * y0 + h10 * h * m0 + h01 * y1 + h11 * h * m1;
+    }
+  }
+
+  /**
    * First abscissa at which the interpolant of non-decreasing data reaches a level, by bisection
    * inside the interval found from the knots (monotone there). The result is accurate to a few ulps
    * of the abscissa.

@@ -99,4 +99,32 @@ class MonotoneCubicTest {
         .isInstanceOf(IllegalArgumentException.class)
         .hasMessage("knot at index 1 (1.0, NaN) must be finite");
   }
+
+  @Test
+  @DisplayName(
+      "valuesInInterval gives the bits of valueInInterval point by point (the same expression in"
+          + " the same order; IEEE 754 rounding is deterministic)")
+  void valuesInIntervalSameBits() {
+    java.util.SplittableRandom random = new java.util.SplittableRandom(7);
+    double[] x = new double[30];
+    double[] y = new double[30];
+    for (int i = 1; i < x.length; i++) {
+      x[i] = x[i - 1] + 0.01 + random.nextDouble();
+      y[i] = y[i - 1] + random.nextDouble() * (random.nextBoolean() ? 1 : 1e-9);
+    }
+    MonotoneCubic cubic = MonotoneCubic.of(x, y);
+    for (int i = 0; i < x.length - 1; i++) {
+      double[] at = new double[12];
+      for (int k = 0; k < at.length; k++) {
+        at[k] = x[i] + (x[i + 1] - x[i]) * random.nextDouble();
+      }
+      double[] out = new double[at.length];
+      cubic.valuesInInterval(i, at, 2, 10, out);
+      for (int k = 2; k < 10; k++) {
+        assertThat(out[k]).isEqualTo(cubic.valueInInterval(i, at[k]));
+      }
+      assertThat(out[0]).isZero();
+      assertThat(out[11]).isZero();
+    }
+  }
 }
