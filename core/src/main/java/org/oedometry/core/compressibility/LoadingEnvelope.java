@@ -91,9 +91,17 @@ final class LoadingEnvelope {
     }
   }
 
-  /** Warning when a stress lies outside the envelope's range. */
+  /**
+   * Relative tolerance of the range check: a construction that lands on the first or last test
+   * stress computes it as 10 to a logarithm, which may round an ulp or two beyond it (for example
+   * 10^log10(800 kPa) = 800.0000000000001 kPa); that is still on the tested range.
+   */
+  static final double RANGE_TOLERANCE = 1e-12;
+
+  /** Warning when a stress lies outside the envelope's range (beyond rounding). */
   void rangeWarning(double pressure, List<CompressibilityWarning> warnings) {
-    if (pressure < stress[0] || pressure > stress[size() - 1]) {
+    if (pressure < stress[0] * (1 - RANGE_TOLERANCE)
+        || pressure > stress[size() - 1] * (1 + RANGE_TOLERANCE)) {
       warnings.add(
           new CompressibilityWarning(
               WarningKind.OUTSIDE_TESTED_RANGE,

@@ -178,4 +178,27 @@ class PreconsolidationWarningsTest {
     assertThat(away).isEqualTo(meet != 141e3 && meet != 100e3);
     assertThat(outside).isEqualTo(meet == 4e3);
   }
+
+  @org.junit.jupiter.api.Test
+  @DisplayName(
+      "OUTSIDE_TESTED_RANGE: a pressure that is the last or first test stress up to the rounding of"
+          + " 10^log10 is inside the range; one a millionth beyond is outside")
+  void rangeCheckAllowsRounding() {
+    LoadingEnvelope env = LoadingEnvelope.of(sharpCurve());
+    double first = S[0];
+    double last = S[S.length - 1];
+    // IEEE 754: 10^log10(s) need not round back to s (by hand in Python: 10**math.log10(25e3) is
+    // 25000.000000000004); a construction that lands on a test stress computes it that way.
+    for (double s : new double[] {first, last}) {
+      java.util.List<CompressibilityWarning> warnings = new java.util.ArrayList<>();
+      env.rangeWarning(Math.nextUp(Math.nextUp(s)), warnings);
+      env.rangeWarning(Math.nextDown(Math.nextDown(s)), warnings);
+      env.rangeWarning(Math.pow(10, Math.log10(s)), warnings);
+      assertThat(warnings).as("stress %s", s).isEmpty();
+    }
+    java.util.List<CompressibilityWarning> beyond = new java.util.ArrayList<>();
+    env.rangeWarning(last * (1 + 1e-6), beyond);
+    env.rangeWarning(first * (1 - 1e-6), beyond);
+    assertThat(beyond).hasSize(2).allMatch(w -> w.kind() == WarningKind.OUTSIDE_TESTED_RANGE);
+  }
 }
