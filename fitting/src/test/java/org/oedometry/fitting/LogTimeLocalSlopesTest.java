@@ -44,33 +44,26 @@ class LogTimeLocalSlopesTest {
       int[] from = new int[centres];
       int[] to = new int[centres];
       double[] slopes = new double[centres];
-      int lo = 0;
-      int hi = 0;
+      int[] lo = new int[centres];
+      int[] hi = new int[centres];
       for (int k = 0; k < centres; k++) {
         double c = x[0] + k * step;
-        while (lo < n && x[lo] < c - LogTimeMethod.WINDOW_HALF_WIDTH) {
-          lo++;
+        lo[k] = k > 0 ? lo[k - 1] : 0;
+        hi[k] = k > 0 ? hi[k - 1] : 0;
+        while (lo[k] < n && x[lo[k]] < c - LogTimeMethod.WINDOW_HALF_WIDTH) {
+          lo[k]++;
         }
-        while (hi < n && x[hi] <= c + LogTimeMethod.WINDOW_HALF_WIDTH) {
-          hi++;
+        while (hi[k] < n && x[hi[k]] <= c + LogTimeMethod.WINDOW_HALF_WIDTH) {
+          hi[k]++;
         }
-        fitter.window(c, lo, hi, k, dense, from, to);
+        fitter.window(c, lo[k], hi[k], k, dense, from, to);
       }
       fitter.slopes(dense, from, to, slopes);
-      lo = 0;
-      hi = 0;
       for (int k = 0; k < centres; k++) {
-        double c = x[0] + k * step;
-        while (lo < n && x[lo] < c - LogTimeMethod.WINDOW_HALF_WIDTH) {
-          lo++;
-        }
-        while (hi < n && x[hi] <= c + LogTimeMethod.WINDOW_HALF_WIDTH) {
-          hi++;
-        }
         // fit() is LineFit.of on the same window (the readings or the sampled interpolant).
         assertThat(slopes[k])
             .as("curve %d centre %d", curve, k)
-            .isEqualTo(fitter.fit(c, lo, hi).slope());
+            .isEqualTo(fitter.fit(x[0] + k * step, lo[k], hi[k]).slope());
         checked++;
       }
     }

@@ -155,15 +155,20 @@ public final class MonotoneCubic {
    * @return the cubic's value
    */
   public double valueInInterval(int i, double at) {
-    double h = x[i + 1] - x[i];
-    double s = (at - x[i]) / h;
+    return hermite(x[i], x[i + 1] - x[i], y[i], y[i + 1], slope[i], slope[i + 1], at);
+  }
+
+  /** The cubic Hermite polynomial of one interval (start x0, width h, end values and slopes). */
+  private static double hermite(
+      double x0, double h, double y0, double y1, double m0, double m1, double at) {
+    double s = (at - x0) / h;
     double s2 = s * s;
     double s3 = s2 * s;
     double h00 = 2 * s3 - 3 * s2 + 1;
     double h10 = s3 - 2 * s2 + s;
     double h01 = -2 * s3 + 3 * s2;
     double h11 = s3 - s2;
-    return h00 * y[i] + h10 * h * slope[i] + h01 * y[i + 1] + h11 * h * slope[i + 1];
+    return h00 * y0 + h10 * h * m0 + h01 * y1 + h11 * h * m1;
   }
 
   /**
@@ -183,14 +188,7 @@ public final class MonotoneCubic {
     double m0 = slope[i];
     double m1 = slope[i + 1];
     for (int k = from; k < to; k++) {
-      double s = (at[k] - x0) / h;
-      double s2 = s * s;
-      double s3 = s2 * s;
-      double h00 = 2 * s3 - 3 * s2 + 1;
-      double h10 = s3 - 2 * s2 + s;
-      double h01 = -2 * s3 + 3 * s2;
-      double h11 = s3 - s2;
-      out[k] = h00 * y0 + h10 * h * m0 + h01 * y1 + h11 * h * m1;
+      out[k] = hermite(x0, h, y0, y1, m0, m1, at[k]);
     }
   }
 
