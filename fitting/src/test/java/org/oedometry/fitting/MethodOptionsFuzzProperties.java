@@ -12,9 +12,8 @@ import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
 
 /**
- * Every c<sub>v</sub> method with random legal options on random curves (invented: Terzaghi curves
- * with creep, noise, rounding, a wild reading or nanometre movements; noise only; flat; straight in
- * log time): a finite positive c<sub>v</sub> whose result and warnings print no NaN or infinity, or
+ * Every c<sub>v</sub> method with random legal options on random curves ({@link FuzzCurves},
+ * invented): a finite positive c<sub>v</sub> whose result and warnings print no NaN or infinity, or
  * a {@link FitException} whose reason prints none, or (too few readings after t = 0 only) an {@link
  * IllegalArgumentException}. ARCHITECTURE.md (Errors): "No NaN or infinity in any result"; a valid
  * curve that admits no construction is a FitException.
