@@ -256,15 +256,8 @@ public final class InflectionPointMethod {
     // fits' sums of powers and squares stay within the double range for settlements of any
     // magnitude, and every result scales back exactly (the same bits as without the scaling
     // wherever that did not matter).
-    double largest = 0;
-    for (double value : readings.movement) {
-      largest = Math.max(largest, Math.abs(value));
-    }
-    int exponent = Math.getExponent(largest);
-    double[] d = new double[n];
-    for (int i = 0; i < n; i++) {
-      d[i] = Math.scalb(readings.movement[i], -exponent);
-    }
+    int exponent = readings.movementExponent();
+    double[] d = readings.scaledMovement(exponent);
 
     double narrowest = options.windowHalfWidth();
     int wanted = options.minimumWindowReadings();
