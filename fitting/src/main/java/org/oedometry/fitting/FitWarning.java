@@ -88,6 +88,14 @@ public record FitWarning(Kind kind, String message) {
      */
     READINGS_RESAMPLED,
     /**
+     * The Terzaghi curve implied by the method's own d<sub>0</sub>, d<sub>100</sub> and
+     * c<sub>v</sub> misses the readings it rests on by more than a set fraction of the primary
+     * compression (root mean square; the inflection point method, readings up to the inflection):
+     * noise large against the primary compression, or a misplaced construction. c<sub>v</sub> is
+     * uncertain; compare other methods.
+     */
+    IMPLIED_CURVE_MISSES_READINGS,
+    /**
      * A c<sub>v</sub> method gave no value for this increment (it threw {@link FitException} or
      * rejected the readings); the whole-test reduction records the reason and goes on.
      */
