@@ -205,6 +205,7 @@ public final class EarlySlopeMethod {
     if (!(cv > 0) || !Double.isFinite(cv) || !(t50 > 0) || !Double.isFinite(t50)) {
       throw new FitException("the early slope gives no finite positive c_v");
     }
+    ImpliedCurve.check(t, d, d0, d100, cv, drainagePathMetres, warnings);
     // The sign of the movement and the scale back to metres (exact, a power of 2).
     double sign = readings.sign;
     double metresSlope =

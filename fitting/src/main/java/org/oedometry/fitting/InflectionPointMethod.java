@@ -118,8 +118,8 @@ import org.oedometry.theory.Terzaghi;
  * Warnings: zero reading left out, swelling, readings that end before 90 % consolidation (T at the
  * last reading below 0.848 on this c<sub>v</sub>), window not settled, sparse readings, and the
  * method's own Terzaghi curve missing the readings up to the inflection by more than {@link
- * #IMPLIED_CURVE_MISFIT_LIMIT} of the primary compression (noise large against it, or a misplaced
- * inflection: with reading noise of 1 % of d<sub>p</sub> on the usual lab schedule the
+ * FitWarning#IMPLIED_CURVE_MISFIT_LIMIT} of the primary compression (noise large against it, or a
+ * misplaced inflection: with reading noise of 1 % of d<sub>p</sub> on the usual lab schedule the
  * c<sub>v</sub> error has a median of 5 % and a 90th percentile of 14 %, at 2 % 10 % and 27 %).
  *
  * <p>Settlements of any magnitude give the same c<sub>v</sub>: the readings are scaled by a power
@@ -133,18 +133,6 @@ public final class InflectionPointMethod {
 
   /** Time factor of the inflection of U against log T, T<sub>I</sub> = 0.404176 (computed). */
   public static final double INFLECTION_TIME_FACTOR = inflectionTimeFactor();
-
-  /**
-   * Largest root-mean-square departure of the readings up to the inflection from the method's own
-   * Terzaghi curve, as a fraction of the primary compression, before {@link
-   * FitWarning.Kind#IMPLIED_CURVE_MISSES_READINGS} is raised: 0.04. On exact curves (usual lab
-   * schedule, 10 readings a cycle, every 60 s; T at 24 h 2 to 100, secondary up to 5 % of
-   * d<sub>p</sub> a cycle, immediate settlement up to 2 %) the departure stayed below 0.007; with
-   * reading noise of 2 % of d<sub>p</sub> on the lab schedule, where the c<sub>v</sub> error has a
-   * median of 10 % and a 90th percentile of 27 %, the warning caught 44 of 73 values more than 25 %
-   * off (and warned 161 of 510 others).
-   */
-  public static final double IMPLIED_CURVE_MISFIT_LIMIT = 0.04;
 
   /** Degree of consolidation at the inflection, U<sub>I</sub> = 0.700980 (computed). */
   public static final double INFLECTION_DEGREE = Terzaghi.averageDegree(INFLECTION_TIME_FACTOR);
@@ -352,18 +340,7 @@ public final class InflectionPointMethod {
                   "the local window did not settle on the inflection in %d moves",
                   MAX_ITERATIONS)));
     }
-    double misfit = impliedCurveMisfit(readings.times, d, d0, primary, inflectionTime);
-    if (misfit > IMPLIED_CURVE_MISFIT_LIMIT) {
-      warnings.add(
-          new FitWarning(
-              FitWarning.Kind.IMPLIED_CURVE_MISSES_READINGS,
-              Checks.format(
-                  "the Terzaghi curve of this d0, d100 and c_v misses the readings up to the"
-                      + " inflection by %.1f %% of the primary compression (root mean square; more"
-                      + " than %.0f %%): the readings are noisy against the primary compression, or"
-                      + " the inflection is misplaced, and c_v is uncertain",
-                  100 * misfit, 100 * IMPLIED_CURVE_MISFIT_LIMIT)));
-    }
+    ImpliedCurve.check(readings.times, d, d0, d100, cv, drainagePathMetres, warnings);
     // The sign of the movement and the scale back to metres.
     double sign = Math.scalb(readings.sign, exponent);
     List<PlotPoint> used = new ArrayList<>();
@@ -388,24 +365,6 @@ public final class InflectionPointMethod {
         used,
         drainagePathMetres,
         warnings);
-  }
-
-  /**
-   * Root mean square of the readings' departure from the Terzaghi curve d0 + d<sub>p</sub>
-   * U(T<sub>I</sub> t / t<sub>I</sub>) over the readings up to the inflection time t<sub>I</sub>,
-   * as a fraction of d<sub>p</sub> (settlements in any one unit; 0 if no reading qualifies).
-   */
-  static double impliedCurveMisfit(
-      double[] t, double[] d, double d0, double primary, double inflectionTime) {
-    double sum = 0;
-    int count = 0;
-    for (int i = 0; i < t.length && t[i] <= inflectionTime; i++) {
-      double degree = Terzaghi.averageDegree(INFLECTION_TIME_FACTOR * (t[i] / inflectionTime));
-      double miss = (d[i] - d0) / primary - degree;
-      sum += miss * miss;
-      count++;
-    }
-    return count == 0 ? 0 : Math.sqrt(sum / count);
   }
 
   /**

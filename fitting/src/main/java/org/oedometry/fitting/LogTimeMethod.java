@@ -416,6 +416,7 @@ public final class LogTimeMethod {
         primaryRatio = OptionalDouble.of((d100 - d0) / total);
       }
     }
+    ImpliedCurve.check(t, y, d0, d100, cv, drainagePath, warnings);
     double s = r.sign();
     double x0Line = (d0 - bt) / mi;
     LogTimeGeometry geometry =

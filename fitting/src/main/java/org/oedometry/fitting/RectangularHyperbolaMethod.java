@@ -229,6 +229,14 @@ public final class RectangularHyperbolaMethod {
     ScaledFit f = fitScaled(readings, scale, drainagePathMetres, options);
     List<FitWarning> warnings = new ArrayList<>(readings.warnings);
     warnings.addAll(f.warnings);
+    ImpliedCurve.check(
+        readings.times,
+        readings.scaledMovement(exponent),
+        f.d0,
+        f.d100,
+        f.cv,
+        drainagePathMetres,
+        warnings);
     // Back to metres (d0, d100) and to s/m and 1/m (the line and its points): exact, a power of 2,
     // so the same bits as a fit on the movement itself wherever that stays within the range.
     double sign = readings.sign;

@@ -232,6 +232,7 @@ public final class RootTimeMethod {
         primaryRatio = OptionalDouble.of(10.0 * (d90 - d0) / (9.0 * total));
       }
     }
+    ImpliedCurve.check(t, y, d0, d100, cv, drainagePath, warnings);
     double s = r.sign();
     RootTimeGeometry geometry =
         new RootTimeGeometry(
