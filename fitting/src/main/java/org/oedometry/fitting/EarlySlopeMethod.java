@@ -59,6 +59,12 @@ import org.oedometry.fitting.internal.Checks;
  * by its magnitude), fewer than 3 early readings before 50 % (the 60 % window used), fewer than 4
  * readings on the line, choice not settled.
  *
+ * <p>Self-check: {@link FitWarning.Kind#IMPLIED_CURVE_MISSES_READINGS} when the Terzaghi curve of
+ * the result's own d<sub>0</sub>, d<sub>100</sub> and c<sub>v</sub> misses the readings up to 70 %
+ * consolidation by more than {@link FitWarning#IMPLIED_CURVE_MISFIT_LIMIT} of the primary
+ * compression (root mean square): never on exact curves; on small noisy increments it marks values
+ * that may be far off.
+ *
  * <p>Settlements of any magnitude give the same c<sub>v</sub>: the movement is scaled by a power of
  * 2 (exact) before the fits, the hyperbola's d<sub>100</sub> included, and every settlement is
  * scaled back exactly (tested from 10<sup>-300</sup> to 10<sup>300</sup> times the same curve, with

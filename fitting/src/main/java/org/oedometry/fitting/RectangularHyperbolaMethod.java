@@ -103,6 +103,12 @@ import org.oedometry.theory.Terzaghi;
  * resampled, few early readings for d<sub>0</sub>, readings that end before t<sub>90</sub>, choice
  * or zero not settled.
  *
+ * <p>Self-check: {@link FitWarning.Kind#IMPLIED_CURVE_MISSES_READINGS} when the Terzaghi curve of
+ * the result's own d<sub>0</sub>, d<sub>100</sub> and c<sub>v</sub> misses the readings up to 70 %
+ * consolidation by more than {@link FitWarning#IMPLIED_CURVE_MISFIT_LIMIT} of the primary
+ * compression (root mean square): never on exact curves; on small noisy increments it marks values
+ * that may be far off.
+ *
  * <p>Settlements of any magnitude give the same c<sub>v</sub>: the movement is scaled by a power of
  * 2 (exact) before the fits, and each line's times likewise, with every result scaled back exactly
  * (tested from 10<sup>-300</sup> to 10<sup>300</sup> times the same curve; ordinary curves give the

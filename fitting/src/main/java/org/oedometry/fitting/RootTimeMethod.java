@@ -54,6 +54,12 @@ import org.oedometry.fitting.internal.PreparedReadings;
  *       17.7 % of all were warned; with noise up to 1 &micro;m on 0.2 mm or more, none was.
  * </ol>
  *
+ * <p>Self-check: {@link FitWarning.Kind#IMPLIED_CURVE_MISSES_READINGS} when the Terzaghi curve of
+ * the result's own d<sub>0</sub>, d<sub>100</sub> and c<sub>v</sub> misses the readings up to 70 %
+ * consolidation by more than {@link FitWarning#IMPLIED_CURVE_MISFIT_LIMIT} of the primary
+ * compression (root mean square): never on exact curves; on small noisy increments it marks values
+ * that may be far off.
+ *
  * <p>c<sub>v</sub> = T<sub>90</sub> H<sub>dr</sub><sup>2</sup> / t90. With the exact factor ({@link
  * RootTimeOptions#EXACT_FACTOR}) c<sub>v</sub> is within 0.5 % on exact Terzaghi curves; with the
  * published 1.15 (the default) it is about 1.5 % high, as theory predicts. Secondary compression
