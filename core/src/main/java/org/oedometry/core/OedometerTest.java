@@ -98,12 +98,14 @@ public final class OedometerTest {
       SettlementCurve c = increments.get(i).curve();
       for (int j = 0; j < c.size(); j++) {
         if (!Double.isFinite(startHeights[i] - c.settlementMetres(j))) {
-          throw new IllegalArgumentException(
+          throw new InvalidReadingException(
               Checks.format(
                   "settlement at reading %d of the increment at index %d (%s m) takes the"
                       + " specimen height (%s m at the start of the increment) beyond the range"
                       + " of a double",
-                  j, i, Checks.number(c.settlementMetres(j)), Checks.number(startHeights[i])));
+                  j, i, Checks.number(c.settlementMetres(j)), Checks.number(startHeights[i])),
+              i,
+              j);
         }
       }
       startHeights[i + 1] = startHeights[i] - c.finalSettlementMetres();
@@ -133,26 +135,37 @@ public final class OedometerTest {
       for (int j = 0; j < c.size(); j++) {
         double h = startHeights[i] - c.settlementMetres(j);
         if (!(h > heightOfSolids)) {
-          throw new IllegalArgumentException(
+          throw new InvalidReadingException(
               Checks.format(
                   "specimen height at reading %d of the increment at index %d (%s m) is not"
                       + " above the height of solids (%s m): void ratio would be <= 0",
-                  j, i, Checks.number(h), Checks.number(heightOfSolids)));
+                  j, i, Checks.number(h), Checks.number(heightOfSolids)),
+              i,
+              j);
         }
-        checkVoidRatioFinite(
-            h, Checks.format("specimen height at reading %d of the increment at index %d", j, i));
+        if (!Double.isFinite(h / heightOfSolids)) {
+          throw new InvalidReadingException(
+              voidRatioBeyondRange(
+                  Checks.format("specimen height at reading %d of the increment at index %d", j, i),
+                  h),
+              i,
+              j);
+        }
       }
     }
   }
 
   private void checkVoidRatioFinite(double height, String what) {
     if (!Double.isFinite(height / heightOfSolids)) {
-      throw new IllegalArgumentException(
-          Checks.format(
-              "%s (%s m) is too large for a void ratio: more than the largest double times the"
-                  + " height of solids (%s m)",
-              what, Checks.number(height), Checks.number(heightOfSolids)));
+      throw new IllegalArgumentException(voidRatioBeyondRange(what, height));
     }
+  }
+
+  private String voidRatioBeyondRange(String what, double height) {
+    return Checks.format(
+        "%s (%s m) is too large for a void ratio: more than the largest double times the height of"
+            + " solids (%s m)",
+        what, Checks.number(height), Checks.number(heightOfSolids));
   }
 
   /**
@@ -605,7 +618,8 @@ public final class OedometerTest {
      * @throws IllegalArgumentException if there is no increment, a stress before differs from the
      *     stress after the previous increment, the settlements exceed the initial height, a height
      *     reaches the height of solids, or a height or void ratio at a reading would exceed the
-     *     range of a double
+     *     range of a double (for a reading: its subclass {@link InvalidReadingException}, which
+     *     names the increment and the reading)
      * @throws NullPointerException if the drainage, rule, identifiers or an increment is null
      */
     public OedometerTest build() {

@@ -233,4 +233,32 @@ class OedometerTestTest {
         .isCloseTo(e0 - (1 + e0) * -1e305 / 0.020, withinPercentage(1e-10));
     assertThat(FiniteResults.notFinite(t)).isEmpty();
   }
+
+  @Test
+  @DisplayName(
+      "a reading that takes the height below the solids is an InvalidReadingException pointing at"
+          + " it (increment 1, reading 2), an IllegalArgumentException like every invalid input")
+  void readingBelowTheSolidsPointsAtIt() {
+    // The worked example has H_s = 10.0602 mm; 19.5 mm at the start of increment 1 less 10 mm
+    // leaves 9.5 mm, below it (by hand).
+    SettlementCurve bad =
+        SettlementCurve.of(new double[] {0, 60, 600, 86_400}, new double[] {0, 4e-4, 0.010, 1e-3});
+    List<LoadIncrement> increments =
+        List.of(
+            LoadIncrement.of(0, 50e3, curve(0.0005)),
+            LoadIncrement.of(50e3, 100e3, bad),
+            LoadIncrement.of(100e3, 25e3, curve(-0.0002)));
+    assertThatThrownBy(() -> OedometerTest.of(SpecimenTest.example(), increments))
+        .isInstanceOf(IllegalArgumentException.class)
+        .isInstanceOfSatisfying(
+            InvalidReadingException.class,
+            e -> {
+              assertThat(e.incrementIndex()).isEqualTo(1);
+              assertThat(e.readingIndex()).isEqualTo(2);
+            })
+        .hasMessageContaining("reading 2 of the increment at index 1");
+    assertThatThrownBy(() -> new InvalidReadingException("x", -1, 0))
+        .isExactlyInstanceOf(IllegalArgumentException.class)
+        .hasMessageContaining("(-1)");
+  }
 }

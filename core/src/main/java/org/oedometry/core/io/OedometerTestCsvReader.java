@@ -16,6 +16,7 @@ import java.util.regex.Pattern;
 import org.oedometry.core.DrainagePathRule;
 import org.oedometry.core.GaugeConversion;
 import org.oedometry.core.GaugeDirection;
+import org.oedometry.core.InvalidReadingException;
 import org.oedometry.core.LabUnit;
 import org.oedometry.core.LabUnit.Quantity;
 import org.oedometry.core.LoadIncrement;
@@ -235,29 +236,23 @@ public final class OedometerTestCsvReader {
   }
 
   /**
-   * The error for a test that {@link OedometerTest} refuses although every row passed: its checks
-   * of the heights are redone here, in its order and with its arithmetic on the values it was
-   * given, to find the row responsible (a reading), or the rows involved in a check over the whole
-   * test (the final height; the height of solids from the final water content). The stress
-   * continuity and the count of increments are checked row by row before (not reached here).
+   * The error for a test that {@link OedometerTest} refuses although every row passed: the row of
+   * the reading an {@link InvalidReadingException} points at, or the rows involved in a check over
+   * the whole test (the final height; the height of solids from the final water content). The
+   * stress continuity and the count of increments are checked row by row before (not reached here).
    */
   private static TestDataException testError(
       IllegalArgumentException e, Properties properties, Readings readings) {
-    Specimen specimen = properties.specimen;
-    List<SettlementCurve> curves = readings.curves;
-    int n = curves.size();
-    double[] start = new double[n + 1];
-    start[0] = specimen.initialHeightMetres();
-    for (int i = 0; i < n; i++) {
-      SettlementCurve c = curves.get(i);
-      for (int j = 0; j < c.size(); j++) {
-        if (!Double.isFinite(start[i] - c.settlementMetres(j))) {
-          return readings.error(i, j, e);
-        }
-      }
-      start[i + 1] = start[i] - c.finalSettlementMetres();
+    if (e instanceof InvalidReadingException reading) {
+      return readings.error(reading.incrementIndex(), reading.readingIndex(), e);
     }
-    double finalHeight = start[n];
+    // A check over the whole test: the final height (the initial height less every increment's
+    // last reading), or the height of solids that the final water content gives from it.
+    Specimen specimen = properties.specimen;
+    double finalHeight = specimen.initialHeightMetres();
+    for (SettlementCurve curve : readings.curves) {
+      finalHeight -= curve.finalSettlementMetres();
+    }
     if (!(finalHeight > 0)) {
       return new TestDataException(
           readings.source,
@@ -272,13 +267,7 @@ public final class OedometerTestCsvReader {
               + ")",
           e);
     }
-    boolean fromWaterContent = specimen.solidsBasis() == Specimen.SolidsBasis.FINAL_WATER_CONTENT;
-    double heightOfSolids =
-        fromWaterContent
-            ? finalHeight / (1 + specimen.finalVoidRatioFromWaterContent().getAsDouble())
-            : specimen.heightOfSolidsFromDryMass().getAsDouble();
-    if (fromWaterContent
-        && (!(start[0] > heightOfSolids) || !Double.isFinite(start[0] / heightOfSolids))) {
+    if (specimen.solidsBasis() == Specimen.SolidsBasis.FINAL_WATER_CONTENT) {
       return new TestDataException(
           properties.source,
           0,
@@ -296,15 +285,6 @@ public final class OedometerTestCsvReader {
               + lines(readings.lastRows())
               + ")",
           e);
-    }
-    for (int i = 0; i < n; i++) {
-      SettlementCurve c = curves.get(i);
-      for (int j = 0; j < c.size(); j++) {
-        double h = start[i] - c.settlementMetres(j);
-        if (!(h > heightOfSolids) || !Double.isFinite(h / heightOfSolids)) {
-          return readings.error(i, j, e);
-        }
-      }
     }
     return new TestDataException(readings.source, 0, null, null, e.getMessage(), e);
   }

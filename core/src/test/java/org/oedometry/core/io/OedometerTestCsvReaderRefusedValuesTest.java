@@ -13,6 +13,7 @@ import org.assertj.core.api.ThrowableAssert.ThrowingCallable;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.oedometry.core.InvalidReadingException;
 import org.oedometry.core.LoadIncrement;
 import org.oedometry.core.OedometerTest;
 import org.oedometry.core.SettlementCurve;
@@ -103,16 +104,20 @@ class OedometerTestCsvReaderRefusedValuesTest {
         assertThrows(TestDataException.class, () -> OedometerTestCsvReader.read(dir));
     // Project rule (RULES.md): no NaN or Infinity leaves the library, also not in messages.
     assertThat(e.getMessage()).doesNotContain("NaN").doesNotContain("Infinity");
-    // Task: the value type's exception is kept as the cause (a plain IllegalArgumentException
-    // from the value type, not one of the reader's own).
-    assertThat(e.getCause()).isExactlyInstanceOf(IllegalArgumentException.class);
+    // Task: the value type's exception is kept as the cause (an IllegalArgumentException from the
+    // value type, or its InvalidReadingException, not one of the reader's own).
+    assertThat(e.getCause())
+        .isInstanceOf(IllegalArgumentException.class)
+        .isNotInstanceOf(TestDataException.class);
     return e;
   }
 
   /** The message of the value type's own refusal of the same values (called directly). */
   private static String modelMessage(ThrowingCallable build) {
     Throwable refusal = catchThrowable(build);
-    assertThat(refusal).isExactlyInstanceOf(IllegalArgumentException.class);
+    assertThat(refusal)
+        .isInstanceOf(IllegalArgumentException.class)
+        .isNotInstanceOf(TestDataException.class);
     return refusal.getMessage();
   }
 
@@ -298,6 +303,10 @@ class OedometerTestCsvReaderRefusedValuesTest {
                             SettlementCurve.of(new double[] {0, 60}, new double[] {0, -1e308})))));
     assertAtRow(e, file(CsvTables.READINGS_FILE), 3, "settlement_m", "-1e308", model);
     assertThat(e.getCause()).hasMessage(model);
+    // The value type points at the reading itself: increment 0, reading 1 (the row on line 3).
+    assertThat(e.getCause()).isInstanceOf(InvalidReadingException.class);
+    assertThat(((InvalidReadingException) e.getCause()).incrementIndex()).isZero();
+    assertThat(((InvalidReadingException) e.getCause()).readingIndex()).isEqualTo(1);
   }
 
   @Test
@@ -318,7 +327,7 @@ class OedometerTestCsvReaderRefusedValuesTest {
                         new double[] {0, 0.0004, 0.001},
                         new double[] {0, -0.0001, -0.0002})));
     assertAtRow(e, file(CsvTables.READINGS_FILE), 3, "settlement_m", "0.012", model);
-    assertThat(e.getCause()).hasMessage(model);
+    assertThat(e.getCause()).hasMessage(model).isInstanceOf(InvalidReadingException.class);
 
     // By hand: 1e-300 kg gives H_s = 8.4e-302 m (H_0 / H_s = 2.4e299, finite); a swelling of
     // 1e10 m gives H = 1e10 m and H / H_s = 1.2e311, above 1.8e308.
