@@ -133,6 +133,7 @@ class ImpliedCurveTest {
   void eachConstructionExactNeverNoisySometimes(String name, Fit fit) {
     SplittableRandom random = new SplittableRandom(23);
     int noisyWarned = 0;
+    int exactChecked = 0;
     for (int k = 0; k < 150; k++) {
       double lastT = Math.exp(Math.log(2) + (Math.log(100) - Math.log(2)) * random.nextDouble());
       double cv = lastT * H * H / 86_400;
@@ -160,6 +161,7 @@ class ImpliedCurveTest {
         assertThat(fit.warnings(exact, H))
             .as("%s, exact curve %d", name, k)
             .noneMatch(w -> w.is(FitWarning.Kind.IMPLIED_CURVE_MISSES_READINGS));
+        exactChecked++;
       } catch (FitException refused) {
         // The construction's own refusal (for example Asaoka-like sparse ranges) is not checked.
       }
@@ -177,6 +179,7 @@ class ImpliedCurveTest {
         }
       }
     }
+    assertThat(exactChecked).as("%s: exact curves given a value", name).isGreaterThan(100);
     assertThat(noisyWarned).as(name).isPositive();
   }
 }
