@@ -62,24 +62,9 @@ class ImpliedCurveTest {
     int bad = 0;
     int badWarned = 0;
     for (int k = 0; k < 300; k++) {
-      double lastT = Math.exp(Math.log(2) + (Math.log(100) - Math.log(2)) * random.nextDouble());
-      double cv = lastT * H * H / 86_400;
-      double creep = random.nextBoolean() ? 0 : 0.05 * DP * random.nextDouble();
-      SyntheticIncrement.CreepShape shape =
-          creep == 0
-              ? SyntheticIncrement.CreepShape.NONE
-              : random.nextBoolean()
-                  ? SyntheticIncrement.CreepShape.SMOOTH
-                  : SyntheticIncrement.CreepShape.AFTER_KINK;
-      SyntheticIncrement increment =
-          new SyntheticIncrement(
-              0, 0.02 * DP * random.nextDouble(), DP, cv, H, shape, creep, H * H / cv);
-      double[] times =
-          switch (k % 3) {
-            case 0 -> ReadingSchedules.usualLab();
-            case 1 -> ReadingSchedules.logSpaced(6, 86_400, 10);
-            default -> ReadingSchedules.uniform(60, 86_400);
-          };
+      SyntheticIncrement increment = exactIncrement(random, 2, 100, 0.02, 0.05, false);
+      double cv = increment.cv();
+      double[] times = schedule(k, 3);
       SettlementCurve exact = SyntheticReadings.sample(increment, times, 0, 0, 1).toCurve();
       InflectionPointResult clean = InflectionPointMethod.fit(exact, H);
       assertThat(clean.hasWarning(FitWarning.Kind.IMPLIED_CURVE_MISSES_READINGS))
@@ -135,27 +120,8 @@ class ImpliedCurveTest {
     int noisyWarned = 0;
     int exactChecked = 0;
     for (int k = 0; k < 150; k++) {
-      double lastT = Math.exp(Math.log(2) + (Math.log(100) - Math.log(2)) * random.nextDouble());
-      double cv = lastT * H * H / 86_400;
-      double creep = random.nextBoolean() ? 0 : 0.05 * DP * random.nextDouble();
-      SyntheticIncrement increment =
-          new SyntheticIncrement(
-              0,
-              0.02 * DP * random.nextDouble(),
-              DP,
-              cv,
-              H,
-              creep == 0
-                  ? SyntheticIncrement.CreepShape.NONE
-                  : SyntheticIncrement.CreepShape.SMOOTH,
-              creep,
-              H * H / cv);
-      double[] times =
-          switch (k % 3) {
-            case 0 -> ReadingSchedules.usualLab();
-            case 1 -> ReadingSchedules.logSpaced(6, 86_400, 10);
-            default -> ReadingSchedules.uniform(60, 86_400);
-          };
+      SyntheticIncrement increment = exactIncrement(random, 2, 100, 0.02, 0.05, false);
+      double[] times = schedule(k, 3);
       SettlementCurve exact = SyntheticReadings.sample(increment, times, 0, 0, 1).toCurve();
       try {
         assertThat(fit.warnings(exact, H))
@@ -193,30 +159,8 @@ class ImpliedCurveTest {
     SplittableRandom random = new SplittableRandom(3);
     int checked = 0;
     for (int k = 0; k < 400; k++) {
-      double lastT = Math.exp(Math.log(200) * random.nextDouble());
-      double cv = lastT * H * H / 86_400;
-      SyntheticIncrement.CreepShape shape =
-          SyntheticIncrement.CreepShape.values()[
-              random.nextInt(SyntheticIncrement.CreepShape.values().length)];
-      double creep =
-          shape == SyntheticIncrement.CreepShape.NONE ? 0 : 0.10 * DP * random.nextDouble();
-      SyntheticIncrement increment =
-          new SyntheticIncrement(
-              0,
-              0.2 * DP * random.nextDouble(),
-              DP,
-              cv,
-              H,
-              shape,
-              creep,
-              H * H / cv * (0.3 + 3 * random.nextDouble()));
-      double[] times =
-          switch (k % 4) {
-            case 0 -> ReadingSchedules.usualLab();
-            case 1 -> ReadingSchedules.logSpaced(6, 86_400, 10);
-            case 2 -> ReadingSchedules.uniform(60, 86_400);
-            default -> ReadingSchedules.withZeroReading(ReadingSchedules.usualLab());
-          };
+      SyntheticIncrement increment = exactIncrement(random, 1, 200, 0.2, 0.10, true);
+      double[] times = schedule(k, 4);
       SettlementCurve exact = SyntheticReadings.sample(increment, times, 0, 0, 1).toCurve();
       try {
         assertThat(fit.warnings(exact, H))
@@ -228,5 +172,48 @@ class ImpliedCurveTest {
       }
     }
     assertThat(checked).as(name).isGreaterThan(300);
+  }
+
+  /**
+   * An exact Terzaghi increment (invented) of d_p = DP on H: T at 24 h log-uniform in [lowest,
+   * highest], immediate settlement up to {@code immediate} d_p, and with probability 1/2 (or one of
+   * the three shapes, when {@code anyShape}) secondary compression up to {@code creep} d_p a cycle
+   * from H^2/c_v (or 0.3 to 3.3 times that, when {@code anyShape}).
+   */
+  private static SyntheticIncrement exactIncrement(
+      SplittableRandom random,
+      double lowest,
+      double highest,
+      double immediate,
+      double creep,
+      boolean anyShape) {
+    double lastT =
+        Math.exp(Math.log(lowest) + (Math.log(highest) - Math.log(lowest)) * random.nextDouble());
+    double cv = lastT * H * H / 86_400;
+    SyntheticIncrement.CreepShape shape =
+        anyShape
+            ? SyntheticIncrement.CreepShape.values()[
+                random.nextInt(SyntheticIncrement.CreepShape.values().length)]
+            : random.nextBoolean()
+                ? SyntheticIncrement.CreepShape.NONE
+                : SyntheticIncrement.CreepShape.SMOOTH;
+    double slope =
+        shape == SyntheticIncrement.CreepShape.NONE ? 0 : creep * DP * random.nextDouble();
+    double onset = H * H / cv * (anyShape ? 0.3 + 3 * random.nextDouble() : 1);
+    return new SyntheticIncrement(
+        0, immediate * DP * random.nextDouble(), DP, cv, H, shape, slope, onset);
+  }
+
+  /**
+   * Schedule k of {@code kinds}: the usual lab times, 10 readings a cycle, every 60 s, and (with 4
+   * kinds) the usual lab times with a zero reading.
+   */
+  private static double[] schedule(int k, int kinds) {
+    return switch (k % kinds) {
+      case 0 -> ReadingSchedules.usualLab();
+      case 1 -> ReadingSchedules.logSpaced(6, 86_400, 10);
+      case 2 -> ReadingSchedules.uniform(60, 86_400);
+      default -> ReadingSchedules.withZeroReading(ReadingSchedules.usualLab());
+    };
   }
 }
