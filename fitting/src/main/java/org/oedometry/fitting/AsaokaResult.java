@@ -104,16 +104,6 @@ public record AsaokaResult(
   }
 
   /**
-   * Whether a warning of the given kind was raised.
-   *
-   * @param kind a kind
-   * @return true if {@link #warnings()} holds one of that kind
-   */
-  public boolean hasWarning(FitWarning.Kind kind) {
-    return warnings.stream().anyMatch(w -> w.is(kind));
-  }
-
-  /**
    * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year), b<sub>0</sub> in mm,
    * b<sub>1</sub>, final settlement in mm, times in min and the warnings' kinds.
    *

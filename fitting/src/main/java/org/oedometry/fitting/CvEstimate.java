@@ -39,4 +39,14 @@ public interface CvEstimate {
    * @return the warnings; empty when there are none
    */
   List<FitWarning> warnings();
+
+  /**
+   * Whether a warning of the given kind was raised.
+   *
+   * @param kind a kind
+   * @return true if {@link #warnings()} holds one of that kind
+   */
+  default boolean hasWarning(FitWarning.Kind kind) {
+    return warnings().stream().anyMatch(w -> w.is(kind));
+  }
 }

@@ -83,16 +83,6 @@ public record EarlySlopeResult(
   }
 
   /**
-   * Whether a warning of the given kind was raised.
-   *
-   * @param kind a kind
-   * @return true if {@link #warnings()} holds one of that kind
-   */
-  public boolean hasWarning(FitWarning.Kind kind) {
-    return warnings.stream().anyMatch(w -> w.is(kind));
-  }
-
-  /**
    * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year), settlements in mm, t50
    * in min and the warnings' kinds.
    *

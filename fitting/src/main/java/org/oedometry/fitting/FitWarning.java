@@ -136,6 +136,13 @@ public record FitWarning(Kind kind, String message) {
      */
     DRAINAGE_PATH_FALLBACK,
     /**
+     * The whole-test reduction passed over a preferred method's c<sub>v</sub> for the derived
+     * quantities (k, C<sub>k</sub>, the end-of-primary point) because that method's own Terzaghi
+     * curve misses the readings ({@link #IMPLIED_CURVE_MISSES_READINGS}), and took the next
+     * preferred method whose curve does not.
+     */
+    PREFERRED_METHOD_PASSED_OVER,
+    /**
      * The e &ndash; log &sigma;' point of the increment should sit at the end of primary
      * consolidation, but no construction gave d<sub>100</sub>: the end of the increment was used.
      */

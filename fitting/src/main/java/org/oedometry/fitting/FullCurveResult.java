@@ -122,16 +122,6 @@ public record FullCurveResult(
   }
 
   /**
-   * Whether a warning of the given kind was raised.
-   *
-   * @param kind a kind
-   * @return true if {@link #warnings()} holds one of that kind
-   */
-  public boolean hasWarning(FitWarning.Kind kind) {
-    return warnings.stream().anyMatch(w -> w.is(kind));
-  }
-
-  /**
    * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year) with its interval,
    * d<sub>0</sub>, d<sub>100</sub> and s in mm, and the warnings' kinds.
    *

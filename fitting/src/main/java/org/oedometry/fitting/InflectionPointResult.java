@@ -98,16 +98,6 @@ public record InflectionPointResult(
   }
 
   /**
-   * Whether a warning of the given kind was raised.
-   *
-   * @param kind a kind
-   * @return true if {@link #warnings()} holds one of that kind
-   */
-  public boolean hasWarning(FitWarning.Kind kind) {
-    return warnings.stream().anyMatch(w -> w.is(kind));
-  }
-
-  /**
    * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year), t<sub>I</sub> in min,
    * settlements in mm, the window and its correction, and the warnings' kinds.
    *

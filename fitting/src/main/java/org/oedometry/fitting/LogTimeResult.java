@@ -79,14 +79,4 @@ public record LogTimeResult(
   public CvMethod method() {
     return CvMethod.LOG_TIME;
   }
-
-  /**
-   * Whether a warning of the given kind was raised.
-   *
-   * @param kind a kind
-   * @return true if {@link #warnings()} holds one of that kind
-   */
-  public boolean hasWarning(FitWarning.Kind kind) {
-    return warnings.stream().anyMatch(w -> w.is(kind));
-  }
 }

@@ -97,16 +97,6 @@ public record RectangularHyperbolaResult(
   }
 
   /**
-   * Whether a warning of the given kind was raised.
-   *
-   * @param kind a kind
-   * @return true if {@link #warnings()} holds one of that kind
-   */
-  public boolean hasWarning(FitWarning.Kind kind) {
-    return warnings.stream().anyMatch(w -> w.is(kind));
-  }
-
-  /**
    * A summary for JShell: c<sub>v</sub> in m<sup>2</sup>/yr (Julian year), times in min,
    * d<sub>0</sub> and d<sub>100</sub> in mm and the warnings' kinds.
    *

@@ -3,9 +3,14 @@ package org.oedometry.fitting;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.List;
 import java.util.SplittableRandom;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.synthetic.ReadingSchedules;
 import org.oedometry.fitting.synthetic.SyntheticIncrement;
@@ -89,28 +94,25 @@ class ImpliedCurveTest {
     assertThat(badWarned).isGreaterThanOrEqualTo(bad / 2);
   }
 
-  static java.util.stream.Stream<org.junit.jupiter.params.provider.Arguments> constructions() {
-    return java.util.stream.Stream.of(
-        org.junit.jupiter.params.provider.Arguments.of(
-            "log-time", (Fit) (c, h) -> LogTimeMethod.fit(c, h).warnings()),
-        org.junit.jupiter.params.provider.Arguments.of(
-            "root-time", (Fit) (c, h) -> RootTimeMethod.fit(c, h).warnings()),
-        org.junit.jupiter.params.provider.Arguments.of(
+  static Stream<Arguments> constructions() {
+    return Stream.of(
+        Arguments.of("log-time", (Fit) (c, h) -> LogTimeMethod.fit(c, h).warnings()),
+        Arguments.of("root-time", (Fit) (c, h) -> RootTimeMethod.fit(c, h).warnings()),
+        Arguments.of(
             "inflection point", (Fit) (c, h) -> InflectionPointMethod.fit(c, h).warnings()),
-        org.junit.jupiter.params.provider.Arguments.of(
+        Arguments.of(
             "rectangular hyperbola",
             (Fit) (c, h) -> RectangularHyperbolaMethod.fit(c, h).warnings()),
-        org.junit.jupiter.params.provider.Arguments.of(
-            "early slope", (Fit) (c, h) -> EarlySlopeMethod.fit(c, h).warnings()));
+        Arguments.of("early slope", (Fit) (c, h) -> EarlySlopeMethod.fit(c, h).warnings()));
   }
 
   /** A construction's warnings on a curve. */
   interface Fit {
-    java.util.List<FitWarning> warnings(SettlementCurve curve, double drainagePath);
+    List<FitWarning> warnings(SettlementCurve curve, double drainagePath);
   }
 
-  @org.junit.jupiter.params.ParameterizedTest(name = "{0}")
-  @org.junit.jupiter.params.provider.MethodSource("constructions")
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("constructions")
   @DisplayName(
       "Each construction: never raised on 150 exact curves (three schedules, creep, immediate"
           + " settlement); raised on some of the same lab-schedule curves read with noise of 5 % of"
@@ -149,8 +151,8 @@ class ImpliedCurveTest {
     assertThat(noisyWarned).as(name).isPositive();
   }
 
-  @org.junit.jupiter.params.ParameterizedTest(name = "{0}")
-  @org.junit.jupiter.params.provider.MethodSource("constructions")
+  @ParameterizedTest(name = "{0}")
+  @MethodSource("constructions")
   @DisplayName(
       "Each construction: never raised on 400 exact curves with immediate settlement up to 20 % of"
           + " dp, secondary compression up to 10 % of dp a cycle (three shapes, onsets 0.3 to 3.3"

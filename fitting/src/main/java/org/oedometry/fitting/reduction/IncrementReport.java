@@ -34,8 +34,9 @@ import org.oedometry.fitting.RootTimeResult;
  * @param methods one outcome per selected method, in the order of {@link
  *     ReductionOptions#methods()}
  * @param preferredMethod the method whose c<sub>v</sub>, d<sub>100</sub> and k feed the derived
- *     quantities (the first of {@link ReductionOptions#preferredMethods()} that gave a value);
- *     empty when none did
+ *     quantities (the first of {@link ReductionOptions#preferredMethods()} that gave a value whose
+ *     own curve fits the readings, else the first that gave a value; see {@link TestReduction});
+ *     empty when none gave a value
  * @param deformationBasis the settlement that placed this increment on the e &ndash; log &sigma;'
  *     curve
  * @param compressibility void ratios, a<sub>v</sub>, m<sub>v</sub> and mid-increment stresses of

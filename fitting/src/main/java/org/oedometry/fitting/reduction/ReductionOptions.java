@@ -29,7 +29,9 @@ import org.oedometry.fitting.FullCurveOptions;
  *       <td>the order in which an increment's c<sub>v</sub> (and the d<sub>0</sub>,
  *       d<sub>100</sub> and secondary slope that go with it) is taken for k, C<sub>k</sub>, the
  *       end-of-primary point, C<sub>&alpha;</sub> and the height at 50 % consolidation: the first
- *       method of the list that gave a value</td></tr>
+ *       method of the list that gave a value whose own Terzaghi curve fits the readings (no {@link
+ *       org.oedometry.fitting.FitWarning.Kind#IMPLIED_CURVE_MISSES_READINGS}), else the first that
+ *       gave a value (see {@link TestReduction})</td></tr>
  *   <tr><td>{@link #deformationBasis()}</td><td>{@link DeformationBasis#END_OF_PRIMARY}</td>
  *       <td>which settlement places each increment on the e &ndash; log &sigma;' curve: the end of
  *       primary consolidation (d<sub>100</sub> of the preferred method), or the last reading; an

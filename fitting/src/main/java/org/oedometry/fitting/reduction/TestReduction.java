@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.function.Function;
 import java.util.stream.IntStream;
 import org.oedometry.core.DrainagePathRule;
 import org.oedometry.core.LoadIncrement;
@@ -62,9 +63,10 @@ import org.oedometry.theory.Drainage;
  *       DrainagePathRule#MEAN_HEIGHT} from the heights of the readings. {@link
  *       DrainagePathRule#HEIGHT_AT_HALF_CONSOLIDATION} needs d<sub>50</sub> = (d<sub>0</sub> +
  *       d<sub>100</sub>)/2 of a fit, so it takes one fixed-point step: the first preferred method
- *       that gives d<sub>0</sub> and d<sub>100</sub> is fitted with the drainage path of the start
- *       height, the height at d<sub>50</sub> of that fit gives H<sub>dr</sub>, and every method is
- *       then fitted with that H<sub>dr</sub>. One step suffices for the constructions we run: their
+ *       that gives d<sub>0</sub> and d<sub>100</sub> (one whose own curve fits the readings first,
+ *       as for the preferred value below) is fitted with the drainage path of the start height, the
+ *       height at d<sub>50</sub> of that fit gives H<sub>dr</sub>, and every method is then fitted
+ *       with that H<sub>dr</sub>. One step suffices for the constructions we run: their
  *       d<sub>0</sub> and d<sub>100</sub> do not depend on H<sub>dr</sub>, which only scales
  *       c<sub>v</sub>. If no preferred method gives them, the mean height is used with a {@link
  *       FitWarning.Kind#DRAINAGE_PATH_FALLBACK} warning.
@@ -78,6 +80,13 @@ import org.oedometry.theory.Drainage;
  *       design) and the swelling warning (given once per unloading increment by the reduction);
  *       log-time and root-time c<sub>v</sub> differing by more than {@link
  *       ReductionOptions#disagreementFactor()}, a log-time primary ratio outside the usual range.
+ *   <li><b>Preferred value.</b> The c<sub>v</sub> (with its d<sub>0</sub>, d<sub>100</sub>) that
+ *       feeds the derived quantities: the first method of {@link
+ *       ReductionOptions#preferredMethods()} that gave a value whose own Terzaghi curve fits the
+ *       readings, that is without {@link FitWarning.Kind#IMPLIED_CURVE_MISSES_READINGS}; a value
+ *       passed over for that reason is named in a {@link
+ *       FitWarning.Kind#PREFERRED_METHOD_PASSED_OVER} warning. If every value given carries that
+ *       warning, the first value given is taken (its own warning stays in the row).
  * </ol>
  *
  * <h2>Then the whole test</h2>
@@ -194,21 +203,18 @@ public final class TestReduction {
     if (rule.needsFittedCurve()) {
       path = null;
       double startPath = drainage.drainagePath(hStart);
-      for (CvMethod m : preferredSelected(options)) {
-        Attempt a = attempt(m, curve, startPath, options);
-        if (a.estimate().isEmpty()) {
-          continue;
-        }
-        OptionalDouble d0 = Estimates.d0(a.estimate().get());
-        OptionalDouble d100 = Estimates.d100(a.estimate().get());
-        if (d0.isEmpty() || d100.isEmpty()) {
-          continue;
-        }
-        double d50 = 0.5 * (d0.getAsDouble() + d100.getAsDouble());
+      Optional<CvEstimate> first =
+          firstTrusted(
+              preferredSelected(options),
+              m ->
+                  attempt(m, curve, startPath, options)
+                      .estimate()
+                      .filter(e -> halfConsolidationSettlement(e).orElse(hStart) < hStart),
+              new ArrayList<>());
+      if (first.isPresent()) {
+        CvMethod m = first.get().method();
+        double d50 = halfConsolidationSettlement(first.get()).orElseThrow();
         double hHalf = hStart - d50;
-        if (!(hHalf > 0)) {
-          continue;
-        }
         path =
             new DrainagePathChoice(
                 rule,
@@ -224,9 +230,7 @@ public final class TestReduction {
                     mm(hStart),
                     mm(d50),
                     m.label()));
-        break;
-      }
-      if (path == null) {
+      } else {
         double mean = 0.5 * (hStart + hEnd);
         path =
             new DrainagePathChoice(
@@ -321,15 +325,72 @@ public final class TestReduction {
                     rp.getAsDouble(), options.primaryRatioLow(), options.primaryRatioHigh())));
       }
     }
-    Optional<CvEstimate> preferred = Optional.empty();
-    for (CvMethod m : options.preferredMethods()) {
-      Optional<CvEstimate> e = find(attempts, m);
-      if (e.isPresent()) {
-        preferred = e;
-        break;
+    List<CvMethod> passedOver = new ArrayList<>();
+    Optional<CvEstimate> preferred =
+        firstTrusted(options.preferredMethods(), m -> find(attempts, m), passedOver);
+    if (!passedOver.isEmpty()) {
+      StringBuilder names = new StringBuilder();
+      for (CvMethod m : passedOver) {
+        names
+            .append(names.length() == 0 ? "" : ", ")
+            .append(format("%s (%.3g m2/yr)", m.label(), perYear(find(attempts, m).get().cv())));
       }
+      warnings.add(
+          reductionWarning(
+              FitWarning.Kind.PREFERRED_METHOD_PASSED_OVER,
+              format(
+                  "c_v by %s not taken for the derived values: its own Terzaghi curve misses the"
+                      + " readings (%s); %s is taken instead, the next preferred method whose"
+                      + " curve does not",
+                  names,
+                  FitWarning.Kind.IMPLIED_CURVE_MISSES_READINGS,
+                  preferred.get().method().label())));
     }
     return new Fitted(path, attempts, preferred, warnings);
+  }
+
+  /**
+   * The preferred value: in the order given, the first method that gives a usable value whose own
+   * Terzaghi curve fits the readings (no {@link FitWarning.Kind#IMPLIED_CURVE_MISSES_READINGS}),
+   * else the first that gives a usable value at all. Methods are tried lazily, in order, and no
+   * further than needed.
+   *
+   * @param order the preferred methods, in order
+   * @param usable a method's usable value, or empty
+   * @param passedOver receives the methods whose usable values were passed over for a later one
+   *     (left empty when none was, or when every usable value misses its readings)
+   * @return the preferred value, or empty if no method gives a usable one
+   */
+  private static Optional<CvEstimate> firstTrusted(
+      List<CvMethod> order,
+      Function<CvMethod, Optional<CvEstimate>> usable,
+      List<CvMethod> passedOver) {
+    Optional<CvEstimate> firstUsable = Optional.empty();
+    List<CvMethod> missing = new ArrayList<>();
+    for (CvMethod m : order) {
+      Optional<CvEstimate> e = usable.apply(m);
+      if (e.isEmpty()) {
+        continue;
+      }
+      if (!e.get().hasWarning(FitWarning.Kind.IMPLIED_CURVE_MISSES_READINGS)) {
+        passedOver.addAll(missing);
+        return e;
+      }
+      missing.add(m);
+      if (firstUsable.isEmpty()) {
+        firstUsable = e;
+      }
+    }
+    return firstUsable;
+  }
+
+  /** d<sub>50</sub> = (d<sub>0</sub> + d<sub>100</sub>)/2 of an estimate, m, where it has both. */
+  private static OptionalDouble halfConsolidationSettlement(CvEstimate e) {
+    OptionalDouble d0 = Estimates.d0(e);
+    OptionalDouble d100 = Estimates.d100(e);
+    return d0.isPresent() && d100.isPresent()
+        ? OptionalDouble.of(0.5 * (d0.getAsDouble() + d100.getAsDouble()))
+        : OptionalDouble.empty();
   }
 
   private static List<CvMethod> preferredSelected(ReductionOptions options) {

@@ -76,7 +76,7 @@ class TestReductionProperties {
    * 2 % of the height per increment plus a wild reading of 6 %, against a void fraction e0 / (1 +
    * e0) of at least 37.5 %.
    */
-  private static OedometerTest randomTest(SplittableRandom random) {
+  static OedometerTest randomTest(SplittableRandom random) {
     double height = 0.010 + 0.030 * random.nextDouble();
     double diameter = 0.050 + 0.050 * random.nextDouble();
     double gs = 2.5 + 0.3 * random.nextDouble();
@@ -115,7 +115,7 @@ class TestReductionProperties {
         .build();
   }
 
-  private static ReductionOptions randomOptions(SplittableRandom random) {
+  static ReductionOptions randomOptions(SplittableRandom random) {
     ReductionOptions.Builder options = ReductionOptions.builder();
     if (random.nextBoolean()) {
       List<CvMethod> methods = new ArrayList<>(List.of(CvMethod.values()));
