@@ -3,12 +3,10 @@ package org.oedometry.fitting;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import org.apache.commons.math3.distribution.NormalDistribution;
-import org.apache.commons.math3.distribution.TDistribution;
 import org.apache.commons.math3.fitting.leastsquares.ParameterValidator;
-import org.apache.commons.math3.special.Beta;
 import org.oedometry.core.SettlementCurve;
 import org.oedometry.fitting.internal.Checks;
+import org.oedometry.fitting.internal.StudentT;
 import org.oedometry.fitting.internal.WeightedLeastSquares;
 import org.oedometry.theory.ConsolidationCurveModel;
 import org.oedometry.theory.CurveParameters;
@@ -471,7 +469,7 @@ public final class FullCurveMethod {
     errors[0] = Math.scalb(errors[0], scale);
     errors[1] = Math.scalb(errors[1], scale);
     errors[3] = Math.scalb(errors[3], scale);
-    double quantile = studentQuantile(0.5 + options.confidenceLevel() / 2, n - parameterCount);
+    double quantile = StudentT.quantile(0.5 + options.confidenceLevel() / 2, n - parameterCount);
     double halfWidth = quantile * errors[2];
     double cvLow = Math.exp(logCv - halfWidth);
     double cvHigh = Math.exp(logCv + halfWidth);
@@ -727,7 +725,7 @@ public final class FullCurveMethod {
       return found;
     }
     double bound =
-        studentQuantile(1 - OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - parameterCount - 1);
+        StudentT.quantile(1 - OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - parameterCount - 1);
     // Every reading is examined (the screen at minus infinity) up to GROUPING_LIMIT readings, and
     // where the leverage grid would cost as much.
     double screen = Double.NEGATIVE_INFINITY;
@@ -1217,58 +1215,6 @@ public final class FullCurveMethod {
     }
     return List.copyOf(minima.subList(0, Math.min(count, minima.size())));
   }
-
-  /**
-   * Quantile of Student's t distribution, t<sub>&nu;</sub>(P). From &nu; = 1000 on, the
-   * Cornish-Fisher expansion of t about the normal quantile z in powers of 1/&nu; (Abramowitz &amp;
-   * Stegun 1964, 26.7.5, four terms; the next term is of order &nu;<sup>-5</sup>); below, Newton
-   * steps from that expansion on the exact distribution function until a step is below 10<sup>
-   * -14</sup> relative, F(t) = 1/2 + I<sub>y</sub>(1/2, &nu;/2)/2 with y = t<sup>2</sup>/(&nu; +
-   * t<sup>2</sup>) where y &lt; 1/2 (A&amp;S 26.7.1 with 26.5.2, from memory: this form keeps its
-   * accuracy where t<sup>2</sup> is small against &nu;) and Commons Math's {@link
-   * TDistribution#cumulativeProbability} (which takes 1 - y) beyond. Several times faster than
-   * Commons Math's inverse, which searches by bracketing. Within 2 x 10<sup>-13</sup> relative of
-   * the exact quantile (tested against a 20-digit mpmath table for &nu; = 1 to 100 000, and against
-   * the closed forms for &nu; = 1 and 2).
-   *
-   * @param probability P in (0.5, 1)
-   * @param degreesOfFreedom &nu; &ge; 1
-   * @return t with F<sub>&nu;</sub>(t) = P
-   */
-  static double studentQuantile(double probability, int degreesOfFreedom) {
-    double z = new NormalDistribution(null, 0, 1).inverseCumulativeProbability(probability);
-    double z2 = z * z;
-    double nu = degreesOfFreedom;
-    double g1 = z * (z2 + 1) / 4;
-    double g2 = z * ((5 * z2 + 16) * z2 + 3) / 96;
-    double g3 = z * (((3 * z2 + 19) * z2 + 17) * z2 - 15) / 384;
-    double g4 = z * ((((79 * z2 + 776) * z2 + 1482) * z2 - 1920) * z2 - 945) / 92_160;
-    double t = z + (g1 + (g2 + (g3 + g4 / nu) / nu) / nu) / nu;
-    if (degreesOfFreedom >= EXPANSION_DEGREES_OF_FREEDOM) {
-      return t;
-    }
-    TDistribution distribution = new TDistribution(null, nu);
-    for (int step = 0; step < 8; step++) {
-      double y = t * t / (nu + t * t);
-      double excess =
-          y < 0.5
-              ? Math.copySign(0.5 * Beta.regularizedBeta(y, 0.5, 0.5 * nu), t) - (probability - 0.5)
-              : distribution.cumulativeProbability(t) - probability;
-      double correction = excess / distribution.density(t);
-      double next = t - correction;
-      if (!Double.isFinite(next)) {
-        break;
-      }
-      t = next;
-      if (Math.abs(correction) <= 1e-14 * Math.abs(t)) {
-        break;
-      }
-    }
-    return t;
-  }
-
-  /** From this many degrees of freedom on, the Cornish-Fisher expansion is the t quantile. */
-  private static final int EXPANSION_DEGREES_OF_FREEDOM = 1000;
 
   /** z statistic of the Wald-Wolfowitz runs test on the residuals' signs (0 if too few). */
   static double runsTestZ(double[] residuals) {

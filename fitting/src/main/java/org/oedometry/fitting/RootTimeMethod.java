@@ -11,6 +11,7 @@ import org.oedometry.fitting.internal.Checks;
 import org.oedometry.fitting.internal.LineFit;
 import org.oedometry.fitting.internal.MonotoneCubic;
 import org.oedometry.fitting.internal.PreparedReadings;
+import org.oedometry.fitting.internal.StudentT;
 
 /**
  * The root-time construction of Taylor (1942, 1948) for one load increment, made objective: the
@@ -289,7 +290,7 @@ public final class RootTimeMethod {
       sxx += dx * dx;
     }
     double residualSd = line.rootMeanSquare() * Math.sqrt(k / (k - 2.0));
-    double halfWidth = FullCurveMethod.studentQuantile(0.975, k - 2) * residualSd / Math.sqrt(sxx);
+    double halfWidth = StudentT.quantile(0.975, k - 2) * residualSd / Math.sqrt(sxx);
     if (!Double.isFinite(halfWidth)) {
       return null;
     }

@@ -404,45 +404,6 @@ class FullCurveMethodTest {
 
   @Test
   @DisplayName(
-      "Student's t quantile: closed forms for 1 and 2 degrees of freedom (tan(pi (P - 1/2)) and (2P -"
-          + " 1) sqrt(2 / (4 P (1 - P)))), a 20-digit table for 1 to 100 000 [mpmath, generator"
-          + " student_t_quantiles.py in the test resources], and the printed table t(0.975) = 12.706, 4.303, 2.571, 2.228, 2.042, 1.980 for 1, 2,"
-          + " 5, 10, 30, 120 [closed forms: Johnson, Kotz & Balakrishnan, Continuous Univariate"
-          + " Distributions vol. 2, ch. 28, from memory; table: ASTM/NIST-style t tables, from"
-          + " memory]")
-  void studentQuantile() throws IOException {
-    for (double probability : new double[] {0.6, 0.9, 0.95, 0.975, 0.995, 0.9995}) {
-      assertThat(FullCurveMethod.studentQuantile(probability, 1))
-          .isCloseTo(
-              Math.tan(Math.PI * (probability - 0.5)),
-              within(1e-12 * Math.tan(Math.PI * (probability - 0.5))));
-      double two = (2 * probability - 1) * Math.sqrt(2 / (4 * probability * (1 - probability)));
-      assertThat(FullCurveMethod.studentQuantile(probability, 2))
-          .isCloseTo(two, within(1e-13 * two));
-    }
-    List<String> table =
-        Files.readAllLines(
-            Path.of("src/test/resources/org/oedometry/fitting/student-t-quantiles.csv"),
-            StandardCharsets.UTF_8);
-    for (String line : table.subList(1, table.size())) {
-      String[] fields = line.split(",");
-      int dof = Integer.parseInt(fields[0]);
-      double probability = Double.parseDouble(fields[1]);
-      double reference = Double.parseDouble(fields[2]);
-      assertThat(FullCurveMethod.studentQuantile(probability, dof))
-          .as("P = %s, %d degrees of freedom", probability, dof)
-          .isCloseTo(reference, within(2e-13 * reference));
-    }
-    int[] dofs = {1, 2, 5, 10, 30, 120};
-    double[] printed = {12.706, 4.303, 2.571, 2.228, 2.042, 1.980};
-    for (int k = 0; k < dofs.length; k++) {
-      assertThat(FullCurveMethod.studentQuantile(0.975, dofs[k]))
-          .isCloseTo(printed[k], within(5e-4));
-    }
-  }
-
-  @Test
-  @DisplayName(
       "Runs test: z = (R - mu) / sigma with mu = 2 n1 n2 / n + 1 and sigma^2 = 2 n1 n2 (2 n1 n2 -"
           + " n) / (n^2 (n - 1)), zeros skipped [Wald & Wolfowitz 1940; NIST/SEMATECH e-Handbook"
           + " 1.3.5.13, from memory]")

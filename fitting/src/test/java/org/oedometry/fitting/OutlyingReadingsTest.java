@@ -13,6 +13,7 @@ import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.internal.StudentT;
 import org.oedometry.fitting.internal.WeightedLeastSquares;
 import org.oedometry.fitting.synthetic.SyntheticStudy;
 import org.oedometry.theory.ConsolidationCurveModel;
@@ -43,8 +44,7 @@ class OutlyingReadingsTest {
   private static List<Integer> everyReadingOutlying(double[] t, double[] w, Fitted f) {
     int n = t.length;
     double bound =
-        FullCurveMethod.studentQuantile(
-            1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
+        StudentT.quantile(1 - FullCurveMethod.OUTLIER_FAMILY_PROBABILITY / (2.0 * n), n - 5);
     double[] every =
         FullCurveMethod.studentizedResiduals(
             t, f.solution().residuals(), w, f.curve(), f.solution(), 4);
