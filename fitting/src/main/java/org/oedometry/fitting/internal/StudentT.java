@@ -66,7 +66,7 @@ public final class StudentT {
   /** 1 - A below which the upper tail is summed as the remainder of the series: {@value}. */
   static final double REMAINDER_BELOW = 0.02;
 
-  /** Most terms of a remainder; never reached for &nu; &le; 100 (about 750 at most). */
+  /** Most terms of a remainder; never reached for &nu; &le; 100 (under 1000 there). */
   private static final int MAXIMUM_TERMS = 100_000;
 
   private StudentT() {}
@@ -76,7 +76,7 @@ public final class StudentT {
    *
    * @param t a value &ge; 0
    * @param degreesOfFreedom &nu; &ge; 1
-   * @return Q in (0, 1/2]; 1/2 at t = 0
+   * @return Q in [0, 1/2]: 1/2 at t = 0, 0 at infinity (and where it is below the smallest double)
    * @throws IllegalArgumentException if t is negative or NaN, or &nu; &lt; 1
    */
   public static double upperTail(double t, int degreesOfFreedom) {
@@ -89,7 +89,7 @@ public final class StudentT {
    *
    * @param t a value &ge; 0
    * @param degreesOfFreedom &nu; &ge; 1
-   * @return F(t) - 1/2 in [0, 1/2)
+   * @return F(t) - 1/2 in [0, 1/2]
    * @throws IllegalArgumentException if t is negative or NaN, or &nu; &lt; 1
    */
   public static double centralHalf(double t, int degreesOfFreedom) {
