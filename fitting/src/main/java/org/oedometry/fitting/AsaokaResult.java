@@ -112,17 +112,17 @@ public record AsaokaResult(
   @Override
   public String toString() {
     return Checks.format(
-        "AsaokaResult[cv %.4g m^2/yr, b0 %.4f mm, b1 %.5f, final %.4f mm, step %.4g min, window"
-            + " %.4g to %.4g min, %s, H_dr %.4g mm, warnings %s]",
+        "AsaokaResult[cv %.4g m^2/yr, b0 %s, b1 %.5f, final %s, step %.4g min, window"
+            + " %.4g to %.4g min, %s, H_dr %s, warnings %s]",
         cv * Results.JULIAN_YEAR_SECONDS,
-        b0 * 1e3,
+        Results.millimetres(b0, ""),
         b1,
-        finalSettlement * 1e3,
+        Results.millimetres(finalSettlement, ""),
         timeStep / 60,
         windowStart / 60,
         windowEnd / 60,
         resampled ? "resampled" : "readings",
-        drainagePath * 1e3,
+        Results.millimetres(drainagePath, ""),
         warnings.stream().map(FitWarning::kind).toList());
   }
 }

@@ -91,16 +91,16 @@ public record EarlySlopeResult(
   @Override
   public String toString() {
     return Checks.format(
-        "EarlySlopeResult[cv %.4g m^2/yr, slope %.4g mm/s^0.5, d0 %.4f mm, d100 %.4f mm (%s),"
-            + " t50 %.4g min, %d early readings, H_dr %.4g mm, warnings %s]",
+        "EarlySlopeResult[cv %.4g m^2/yr, slope %s, d0 %s, d100 %s (%s),"
+            + " t50 %.4g min, %d early readings, H_dr %s, warnings %s]",
         cv * Results.JULIAN_YEAR_SECONDS,
-        earlySlope * 1e3,
-        d0 * 1e3,
-        d100 * 1e3,
+        Results.millimetres(earlySlope, "/s^0.5"),
+        Results.millimetres(d0, ""),
+        Results.millimetres(d100, ""),
         primaryEnd,
         t50 / 60,
         readingsUsed.size(),
-        drainagePath * 1e3,
+        Results.millimetres(drainagePath, ""),
         warnings.stream().map(FitWarning::kind).toList());
   }
 }

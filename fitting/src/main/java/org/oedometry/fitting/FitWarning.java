@@ -62,7 +62,10 @@ public record FitWarning(Kind kind, String message) {
      * finds no t90 at one end).
      */
     WIDE_INTERVAL,
-    /** The residuals run in long same-sign stretches: the model misses part of the curve. */
+    /**
+     * The residuals run in long same-sign stretches: the model misses part of the curve (not read
+     * from residuals at the rounding level of an exact curve, see the full-curve fit).
+     */
     RESIDUALS_SHOW_STRUCTURE,
     /**
      * T at the last reading is below 1 for the lower end of the c<sub>v</sub> interval: primary

@@ -65,8 +65,9 @@ import org.oedometry.theory.Terzaghi;
  *       J<sup>T</sup>W<sup>2</sup>J; A<sup>-1</sup> alone for unit weights), then widened for
  *       residuals that follow each other (lag-1 autocorrelation &rho; &gt; 0, a sign of model error
  *       such as creep the secondary term does not follow) by the factor &radic;((1 + &rho;)/(1 -
- *       &rho;)) of an AR(1) series; the interval is exp(ln c<sub>v</sub> &plusmn; t<sub>n-p</sub>
- *       SE) with Student's t.
+ *       &rho;)) of an AR(1) series (not where the residuals are the rounding of an exact curve,
+ *       {@link #ROUNDING_RESIDUAL_FRACTION}); the interval is exp(ln c<sub>v</sub> &plusmn;
+ *       t<sub>n-p</sub> SE) with Student's t.
  * </ol>
  *
  * <h2>Warnings and errors</h2>
@@ -74,19 +75,20 @@ import org.oedometry.theory.Terzaghi;
  * Warnings: swelling increment, secondary slope at its bound 0, interval wider than a factor of 2
  * (an interval that is not refused, see below, misses one end of the c<sub>v</sub> searched and so
  * spans less than the square of its range, 10<sup>22</sup>), residuals with structure (a runs test
- * on their signs, z &lt; -2.58), more than half of primary consolidation before the first reading
- * (U &gt; 50 % there: d<sub>0</sub> and d<sub>p</sub> are extrapolated), primary consolidation
- * incomplete (T at the last reading below 1 for the lower end of the c<sub>v</sub> interval:
- * c<sub>v</sub> then rests on an unfinished curve and must not be used without review), fewer than
- * half the starts at the best fit, outlying readings (an externally studentized residual beyond the
- * 1 % Bonferroni bound, with the leverage of each reading taken into account; the warning names the
- * readings). Measured on the invented study curves: a reading 10 noise deviations off in the middle
- * of the increment is flagged in 95 % of curves, on clean curves the warning appears in 2 to 4 %;
- * the last reading of a lab schedule, on which the secondary slope rests almost alone, is flagged
- * only when far off. {@link FitException}: the readings do not move, primary consolidation was over
- * before the first reading (c<sub>v</sub> at the fast edge of the search, or U above 99 % at the
- * first reading, {@value #FIRST_READING_REMAINING_LIMIT} of d<sub>p</sub> left to see) or is not
- * seen at all (c<sub>v</sub> at the slow edge of the search, or d<sub>p</sub> at its bound 0, where
+ * on their signs, z &lt; -2.58; not on rounding residuals), more than half of primary consolidation
+ * before the first reading (U &gt; 50 % there: d<sub>0</sub> and d<sub>p</sub> are extrapolated),
+ * primary consolidation incomplete (T at the last reading below 1 for the lower end of the
+ * c<sub>v</sub> interval: c<sub>v</sub> then rests on an unfinished curve and must not be used
+ * without review), fewer than half the starts at the best fit, outlying readings (an externally
+ * studentized residual beyond the 1 % Bonferroni bound, with the leverage of each reading taken
+ * into account; the warning names the readings). Measured on the invented study curves: a reading
+ * 10 noise deviations off in the middle of the increment is flagged in 95 % of curves, on clean
+ * curves the warning appears in 2 to 4 %; the last reading of a lab schedule, on which the
+ * secondary slope rests almost alone, is flagged only when far off. {@link FitException}: the
+ * readings do not move, primary consolidation was over before the first reading (c<sub>v</sub> at
+ * the fast edge of the search, or U above 99 % at the first reading, {@value
+ * #FIRST_READING_REMAINING_LIMIT} of d<sub>p</sub> left to see) or is not seen at all
+ * (c<sub>v</sub> at the slow edge of the search, or d<sub>p</sub> at its bound 0, where
  * c<sub>v</sub> would rest only on the onset of the secondary term), the c<sub>v</sub> searched (T
  * at the last reading 10<sup>-4</sup> to 10<sup>7</sup>) is not a finite positive double for this
  * drainage path and these times (H<sub>dr</sub><sup>2</sup> beyond the range of doubles), the
@@ -165,6 +167,14 @@ public final class FullCurveMethod {
   private static final int CURVE_POINTS = 100;
 
   private static final double RUNS_TEST_CRITICAL_Z = -2.576;
+
+  /**
+   * Root-mean-square residual, as a fraction of the largest settlement fitted, at or below which
+   * the residuals are the rounding of an exact curve (some 10<sup>-16</sup> of it; a dial gauge's
+   * resolution is 10<sup>-3</sup> of a typical increment): their signs are not read for structure
+   * and the interval is not widened for their autocorrelation. Our choice: {@value}.
+   */
+  static final double ROUNDING_RESIDUAL_FRACTION = 1e-12;
 
   /**
    * Fraction of primary consolidation still to come at the first reading below which the fit is
@@ -454,7 +464,11 @@ public final class FullCurveMethod {
       lagProduct += residuals[i] * residuals[i - 1];
       total += (y[i] - mean) * (y[i] - mean);
     }
-    double autocorrelation = sumSquares > 0 ? lagProduct / sumSquares : 0.0;
+    // Residuals at the rounding level of an exact curve (from the fitted magnitudes, scaled like
+    // the residuals): no structure to read, nothing to widen.
+    double largestFitted = Math.scalb(Math.max(Math.abs(lowest), Math.abs(highest)), -scale);
+    boolean roundingOnly = Math.sqrt(sumSquares / n) <= ROUNDING_RESIDUAL_FRACTION * largestFitted;
+    double autocorrelation = sumSquares > 0 && !roundingOnly ? lagProduct / sumSquares : 0.0;
     double clipped = Math.min(0.95, Math.max(0.0, autocorrelation));
     double widening = (1 + clipped) / (1 - clipped);
     CurveParameters fitted = new CurveParameters(p[0], p[1], cv, secondary);
@@ -555,7 +569,7 @@ public final class FullCurveMethod {
                   "the %.0f %% interval of c_v spans a factor of %.3g (%.4g to %.4g m^2/s)",
                   100 * options.confidenceLevel(), spread, cvLow, cvHigh)));
     }
-    double runsZ = runsTestZ(residuals);
+    double runsZ = roundingOnly ? 0.0 : runsTestZ(residuals);
     if (runsZ < RUNS_TEST_CRITICAL_Z) {
       warnings.add(
           new FitWarning(

@@ -131,19 +131,19 @@ public record FullCurveResult(
   public String toString() {
     double year = 365.25 * 86_400;
     return Checks.format(
-        "FullCurveResult[cv %.4g m^2/yr (%.0f %% interval %.4g to %.4g), d0 %.4f mm, d100 %.4f"
-            + " mm, secondary %.4f mm/log cycle, RMS %.2f um, T at last reading %.3g, H_dr %.4g"
-            + " mm, warnings %s]",
+        "FullCurveResult[cv %.4g m^2/yr (%.0f %% interval %.4g to %.4g), d0 %s, d100 %s,"
+            + " secondary %s, RMS %s, T at last reading %.3g, H_dr %s,"
+            + " warnings %s]",
         cv * year,
         100 * confidenceLevel,
         cvLow * year,
         cvHigh * year,
-        d0 * 1e3,
-        d100 * 1e3,
-        secondarySlope * 1e3,
-        rootMeanSquareResidual * 1e6,
+        Results.millimetres(d0, ""),
+        Results.millimetres(d100, ""),
+        Results.millimetres(secondarySlope, "/log cycle"),
+        Results.micrometres(rootMeanSquareResidual),
         timeFactorAtLastReading,
-        drainagePath * 1e3,
+        Results.millimetres(drainagePath, ""),
         warnings.stream().map(FitWarning::kind).toList());
   }
 }

@@ -106,19 +106,19 @@ public record InflectionPointResult(
   @Override
   public String toString() {
     return Checks.format(
-        "InflectionPointResult[cv %.4g m^2/yr, t_I %.4g min, d_I %.4f mm, slope %.4f mm/log cycle,"
-            + " d0 %.4f mm, d100 %.4f mm, %d readings in window of +/-%.3g log cycle (correction"
-            + " %.3g cycle), H_dr %.4g mm, warnings %s]",
+        "InflectionPointResult[cv %.4g m^2/yr, t_I %.4g min, d_I %s, slope %s,"
+            + " d0 %s, d100 %s, %d readings in window of +/-%.3g log cycle (correction"
+            + " %.3g cycle), H_dr %s, warnings %s]",
         cv * Results.JULIAN_YEAR_SECONDS,
         inflectionTime / 60,
-        inflectionSettlement * 1e3,
-        slopePerLogCycle * 1e3,
-        d0 * 1e3,
-        d100 * 1e3,
+        Results.millimetres(inflectionSettlement, ""),
+        Results.millimetres(slopePerLogCycle, "/log cycle"),
+        Results.millimetres(d0, ""),
+        Results.millimetres(d100, ""),
         readingsUsed.size(),
         windowHalfWidth,
         windowCorrection,
-        drainagePath * 1e3,
+        Results.millimetres(drainagePath, ""),
         warnings.stream().map(FitWarning::kind).toList());
   }
 }

@@ -105,17 +105,17 @@ public record RectangularHyperbolaResult(
   @Override
   public String toString() {
     return Checks.format(
-        "RectangularHyperbolaResult[cv %.4g m^2/yr, t60 %.4g min, t90 %.4g min, d0 %.4f mm (%s),"
-            + " d100 %.4f mm, %d %s on the line, H_dr %.4g mm, warnings %s]",
+        "RectangularHyperbolaResult[cv %.4g m^2/yr, t60 %.4g min, t90 %.4g min, d0 %s (%s),"
+            + " d100 %s, %d %s on the line, H_dr %s, warnings %s]",
         cv * Results.JULIAN_YEAR_SECONDS,
         t60 / 60,
         t90 / 60,
-        d0 * 1e3,
+        Results.millimetres(d0, ""),
         zero,
-        d100 * 1e3,
+        Results.millimetres(d100, ""),
         readingsUsed.size(),
         resampled ? "interpolated settlements" : "readings",
-        drainagePath * 1e3,
+        Results.millimetres(drainagePath, ""),
         warnings.stream().map(FitWarning::kind).toList());
   }
 }
