@@ -132,6 +132,7 @@ public final class StudentT {
     boolean centre = probability < 0.75;
     double target = centre ? probability - 0.5 : 1 - probability;
     double logDensityFactor = degreesOfFreedom > CLOSED_FORM_LIMIT ? logDensityFactor(nu) : 0;
+    double previousStep = Double.POSITIVE_INFINITY;
     for (int step = 0; step < 60; step++) {
       double value;
       double density;
@@ -150,9 +151,14 @@ public final class StudentT {
         break;
       }
       t = next;
-      if (Math.abs(logStep) <= 1e-15) {
+      double size = Math.abs(logStep);
+      // Converged, or (beyond the closed forms) at the noise of the incomplete beta function's
+      // continued fraction, where the steps stop shrinking: the iterate is then as good as the
+      // distribution function allows.
+      if (size <= 1e-15 || (size < 1e-10 && size > 0.5 * previousStep)) {
         break;
       }
+      previousStep = size;
     }
     return t;
   }
