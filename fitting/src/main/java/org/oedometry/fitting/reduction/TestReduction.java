@@ -333,15 +333,16 @@ public final class TestReduction {
       for (CvMethod m : passedOver) {
         names
             .append(names.length() == 0 ? "" : ", ")
-            .append(format("%s (%.3g m2/yr)", m.label(), perYear(find(attempts, m).get().cv())));
+            .append(
+                format("%s c_v (%.3g m2/yr)", m.label(), perYear(find(attempts, m).get().cv())));
       }
       warnings.add(
           reductionWarning(
               FitWarning.Kind.PREFERRED_METHOD_PASSED_OVER,
               format(
-                  "c_v by %s not taken for the derived values: its own Terzaghi curve misses the"
+                  "%s not taken for the derived values: its own Terzaghi curve misses the"
                       + " readings (%s); %s is taken instead, the next preferred method whose"
-                      + " curve does not",
+                      + " curve fits them",
                   names,
                   FitWarning.Kind.IMPLIED_CURVE_MISSES_READINGS,
                   preferred.get().method().label())));
