@@ -11,6 +11,7 @@ import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
@@ -42,7 +43,7 @@ public class StudentQuantileBenchmark {
   private TDistribution commons;
 
   /** Makes the probability and the Commons Math distribution (made once, as a caller would). */
-  @org.openjdk.jmh.annotations.Setup
+  @Setup
   public void setUp() {
     probability = use.equals("interval") ? 0.975 : 1 - 0.01 / (2.0 * (freedom + 4));
     commons = new TDistribution(null, freedom);
