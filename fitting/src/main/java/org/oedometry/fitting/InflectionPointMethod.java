@@ -271,7 +271,16 @@ public final class InflectionPointMethod {
     double splineCentre = n <= SPLINE_READINGS ? splineSteepestPoint(x, d) : Double.NaN;
     boolean sparse =
         !Double.isNaN(splineCentre) && nearestReach(x, splineCentre, wanted) > 2 * narrowest;
-    double start = sparse ? splineCentre : steepestOnGrid(x, d, narrowest, wanted);
+    double start;
+    try {
+      start = sparse ? splineCentre : steepestOnGrid(x, d, narrowest, wanted);
+    } catch (FitException refused) {
+      String hint = windowHint(wanted, n);
+      if (hint.isEmpty()) {
+        throw refused;
+      }
+      throw new FitException(refused.getMessage() + hint, refused);
+    }
     Located found = widthLadder(x, d, start, options);
     if (found == null) {
       throw new FitException(
@@ -279,8 +288,12 @@ public final class InflectionPointMethod {
               "no inflection on the log-time curve near t = %.4g s: no local fit of degree %d"
                   + " (half-widths %.3g to %.3g log cycle) has a maximum of slope there (small"
                   + " load-increment ratio, strong secondary compression, or readings too sparse"
-                  + " or too noisy?)",
-              Math.pow(10, start), DEGREE, narrowest, options.widestHalfWidth()));
+                  + " or too noisy?)%s",
+              Math.pow(10, start),
+              DEGREE,
+              narrowest,
+              options.widestHalfWidth(),
+              windowHint(wanted, n)));
     }
     double centre = found.centre;
     if (x[n - 1] - centre < narrowest) {
@@ -288,8 +301,8 @@ public final class InflectionPointMethod {
           Checks.format(
               "the readings end %.3g log cycle after the steepest point (t = %.4g s), less than"
                   + " the window of %.3g: no inflection is established, primary consolidation may"
-                  + " not be complete",
-              x[n - 1] - centre, Math.pow(10, centre), narrowest));
+                  + " not be complete%s",
+              x[n - 1] - centre, Math.pow(10, centre), narrowest, windowHint(wanted, n)));
     }
     if (centre - x[0] < narrowest) {
       throw new FitException(
@@ -365,6 +378,22 @@ public final class InflectionPointMethod {
         used,
         drainagePathMetres,
         warnings);
+  }
+
+  /**
+   * The sentence a refusal adds where the options ask each window to hold more than half of the
+   * readings and more than the default: such windows span most of the curve, and on curves that
+   * only just complete primary consolidation (T near 1 at the last reading) they can miss an
+   * inflection that the default finds (seen on the usual 14 lab readings with 13 a window).
+   */
+  private static String windowHint(int wanted, int n) {
+    int usual = InflectionPointOptions.defaults().minimumWindowReadings();
+    return 2 * wanted > n && wanted > usual
+        ? Checks.format(
+            "; each local fit must hold at least %d of these %d readings (minimumWindowReadings),"
+                + " so it spans most of the curve: the default, %d, may find the inflection",
+            wanted, n, usual)
+        : "";
   }
 
   /**

@@ -18,9 +18,11 @@ import org.oedometry.fitting.internal.Checks;
  * @param widestHalfWidth widest half-width tried, log<sub>10</sub> cycles; in [windowHalfWidth, 2]
  * @param minimumWindowReadings fewest readings a window holds (it is widened on sparse schedules
  *     until it does); in [8, 50] (the local polynomial of degree 5 leaves two degrees of freedom at
- *     8). A value comparable with the number of readings (for example 21 of 30) makes every window
- *     span most of the curve: the steepest point of the first scan then falls at an end, and even
- *     complete curves may be refused as incomplete (16 of 3,000 random exact curves in a review)
+ *     8). A value comparable with the number of readings makes every window span most of the curve,
+ *     and curves that only just complete primary consolidation may then be refused as showing no
+ *     inflection (exact Terzaghi curves on the usual 14 lab readings with T = 1 at the last one:
+ *     found with 8 to 12 a window, refused with 13; 3 of 3,000 random exact curves with half or
+ *     more of their readings a window); such a refusal says so and names the default
  */
 public record InflectionPointOptions(
     double windowHalfWidth, double widestHalfWidth, int minimumWindowReadings) {

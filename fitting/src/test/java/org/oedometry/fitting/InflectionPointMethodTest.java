@@ -7,6 +7,9 @@ import static org.assertj.core.api.Assertions.within;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.oedometry.core.SettlementCurve;
+import org.oedometry.fitting.synthetic.ReadingSchedules;
+import org.oedometry.fitting.synthetic.SyntheticIncrement;
+import org.oedometry.fitting.synthetic.SyntheticReadings;
 import org.oedometry.theory.CurveParameters;
 import org.oedometry.theory.Terzaghi;
 
@@ -444,5 +447,44 @@ class InflectionPointMethodTest {
     InflectionPointResult with = InflectionPointMethod.fit(SettlementCurve.of(t, d), H);
     assertThat(with.cv()).isEqualTo(InflectionPointMethod.fit(c, H).cv());
     assertThat(with.hasWarning(FitWarning.Kind.ZERO_READING_IGNORED)).isTrue();
+  }
+
+  @Test
+  @DisplayName(
+      "An exact Terzaghi curve (theory's U(T), invented) on the usual 14 lab readings with T = 1 at"
+          + " the last one: found exactly with 8 to 12 readings a window; with 13 refused, and the"
+          + " refusal names the window minimum and the default")
+  void largeWindowMinimumIsNamedInTheRefusal() {
+    double cv = H * H / 86_400;
+    SyntheticIncrement increment =
+        new SyntheticIncrement(
+            0, 0, 2e-4, cv, H, SyntheticIncrement.CreepShape.NONE, 0, H * H / cv);
+    SettlementCurve curve =
+        SyntheticReadings.sample(increment, ReadingSchedules.usualLab(), 0, 0, 1).toCurve();
+    assertThat(curve.size()).isEqualTo(14);
+    for (int wanted = 8; wanted <= 12; wanted++) {
+      InflectionPointResult r =
+          InflectionPointMethod.fit(
+              curve, H, InflectionPointOptions.defaults().withMinimumWindowReadings(wanted));
+      assertThat(r.cv() / cv - 1).as("%d a window", wanted).isCloseTo(0, within(1e-3));
+    }
+    assertThatThrownBy(
+            () ->
+                InflectionPointMethod.fit(
+                    curve, H, InflectionPointOptions.defaults().withMinimumWindowReadings(13)))
+        .isInstanceOf(FitException.class)
+        .hasMessageContaining("at least 13 of these 14 readings (minimumWindowReadings)")
+        .hasMessageContaining("the default, 8, may find the inflection");
+    // The default's own refusal of an incomplete curve (T = 0.9 at the last reading) carries no
+    // such sentence.
+    SyntheticIncrement incomplete =
+        new SyntheticIncrement(
+            0, 0, 2e-4, 0.9 * cv, H, SyntheticIncrement.CreepShape.NONE, 0, H * H / cv);
+    SettlementCurve early =
+        SyntheticReadings.sample(incomplete, ReadingSchedules.usualLab(), 0, 0, 1).toCurve();
+    assertThatThrownBy(() -> InflectionPointMethod.fit(early, H))
+        .isInstanceOf(FitException.class)
+        .message()
+        .doesNotContain("minimumWindowReadings");
   }
 }
